@@ -1,0 +1,13 @@
+import type { MigrationContext } from '../migrator';
+import * as demoWorld from './20261202T0000-catalog-and-racers';
+
+export type Migration = {
+  name: string;
+  up(ctx: MigrationContext): Promise<void>;
+  down(ctx: MigrationContext): Promise<void>;
+};
+
+/** Every migration, oldest first. A new file is added here with a timestamped name. */
+export const migrations: Migration[] = [
+  { name: '20261202T0000-catalog-and-racers', ...demoWorld },
+];

@@ -1,0 +1,49 @@
+import type { Server } from 'node:http';
+import { ConfigError, loadConfig } from './config';
+import { createApp } from './app';
+import { createDatabase } from './db/database';
+import { createLogger } from './logger';
+
+async function main(): Promise<void> {
+  let config;
+  try {
+    config = loadConfig();
+  } catch (err) {
+    if (err instanceof ConfigError) {
+      console.error(err.message);
+      process.exit(2);
+    }
+    throw err;
+  }
+  const logger = createLogger(config);
+  const db = createDatabase(config.databaseUrl);
+  await db.ping(5_000);
+
+  const app = createApp({ config, db, logger });
+  const server: Server = app.listen(config.port, config.host, () => {
+    logger.info(`Tunefork is listening on http://${config.host}:${config.port}`);
+  });
+  server.on('error', (err) => {
+    logger.fatal({ err }, 'could not start the HTTP server');
+    process.exit(1);
+  });
+
+  let closing = false;
+  const shutdown = (signal: string) => {
+    if (closing) return;
+    closing = true;
+    logger.info(`${signal}: closing the HTTP server, then the database pool`);
+    server.close(() => {
+      db.close().finally(() => process.exit(0));
+    });
+    server.closeIdleConnections();
+    setTimeout(() => process.exit(1), 10_000).unref();
+  };
+  process.on('SIGINT', () => shutdown('SIGINT'));
+  process.on('SIGTERM', () => shutdown('SIGTERM'));
+}
+
+main().catch((err: unknown) => {
+  console.error('Tunefork could not start:', err instanceof Error ? err.message : err);
+  process.exit(1);
+});

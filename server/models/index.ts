@@ -1,0 +1,27 @@
+import type { Sequelize } from 'sequelize';
+import { Maker } from './Maker';
+import { Kit } from './Kit';
+import { Track } from './Track';
+import { User } from './User';
+
+export { Maker, Kit, Track, User };
+
+export type Models = {
+  Maker: typeof Maker;
+  Kit: typeof Kit;
+  Track: typeof Track;
+  User: typeof User;
+};
+
+/** Registers every model on `sequelize` and wires the associations. */
+export function initModels(sequelize: Sequelize): Models {
+  Maker.initModel(sequelize);
+  Kit.initModel(sequelize);
+  Track.initModel(sequelize);
+  User.initModel(sequelize);
+
+  Maker.hasMany(Kit, { foreignKey: 'makerId', as: 'kits' });
+  Kit.belongsTo(Maker, { foreignKey: 'makerId', as: 'maker' });
+
+  return { Maker, Kit, Track, User };
+}

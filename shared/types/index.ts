@@ -1,0 +1,5 @@
+export * from './errors';
+export * from './health';
+export * from './vehicleClasses';
+export * from './trackTypes';
+export * from './catalog';
