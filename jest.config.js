@@ -24,7 +24,7 @@ module.exports = {
     },
     {
       displayName: 'client',
-      preset: 'jest-expo/web',
+      preset: 'jest-expo',
       testMatch: ['<rootDir>/__tests__/client/**/*.test.tsx'],
       transformIgnorePatterns: [
         'node_modules/(?!((jest-)?react-native|@react-native(-community)?)|expo(nent)?|@expo(nent)?/.*|@expo-google-fonts/.*|react-navigation|@react-navigation/.*|react-native-svg|@tanstack/.*)',

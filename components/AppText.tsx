@@ -17,6 +17,14 @@ export function AppText({ variant = 'body', tone = 'default', style, ...rest }: 
     caution: colors.caution,
     success: colors.success,
   }[tone];
-  const role = variant === 'title' || variant === 'heading' ? 'heading' : undefined;
-  return <Text role={role} style={[typeScale[variant], { color }, style]} {...rest} />;
+  // Titles are the screen's level-1 heading, headings its sections (level 2), unless told otherwise.
+  const heading = variant === 'title' || variant === 'heading';
+  return (
+    <Text
+      role={heading ? 'heading' : undefined}
+      aria-level={heading ? (variant === 'title' ? 1 : 2) : undefined}
+      style={[typeScale[variant], { color }, style]}
+      {...rest}
+    />
+  );
 }

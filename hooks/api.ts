@@ -1,4 +1,4 @@
-import type { z } from 'zod';
+import type { z } from '../shared/types/zod';
 import { apiErrorBodySchema } from '../shared/types/errors';
 
 /** A failed API call, carrying the server's stable code and field-level details. */

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from './zod';
 import { vehicleClassKeySchema } from './vehicleClasses';
 import { trackTypeKeySchema } from './trackTypes';
 

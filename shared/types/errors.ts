@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from './zod';
 
 /**
  * The one error body every API failure uses: `{ "error": { code, message, details? } }`.

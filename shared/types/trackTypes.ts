@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from './zod';
 
 /**
  * The fixed list of track surfaces racers tune for. Used for track records, setup conditions

@@ -1,4 +1,4 @@
-import { z } from 'zod';
+import { z } from './zod';
 
 /** The classes Tunefork keeps setup sheets for. Keys are stable: they are stored in the database. */
 export const VEHICLE_CLASSES = [

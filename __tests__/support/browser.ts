@@ -1,0 +1,53 @@
+import AxeBuilder from '@axe-core/playwright';
+import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { CHROMIUM_ARGS, CHROMIUM_PATH } from './chromium';
+
+export const VIEWPORTS = {
+  phone: { width: 390, height: 844 },
+  wide: { width: 1280, height: 800 },
+} as const;
+
+export function launchBrowser(): Promise<Browser> {
+  return chromium.launch({ executablePath: CHROMIUM_PATH, args: CHROMIUM_ARGS });
+}
+
+export type WatchedPage = {
+  page: Page;
+  context: BrowserContext;
+  /** Console errors and uncaught page errors seen so far. */
+  consoleErrors: string[];
+  /** Content-Security-Policy violations reported by the page. */
+  cspViolations(): Promise<string[]>;
+};
+
+/** A fresh context and page that records console errors and CSP violations. */
+export async function openWatchedPage(browser: Browser, viewport: { width: number; height: number }): Promise<WatchedPage> {
+  const context = await browser.newContext({ viewport });
+  await context.addInitScript(() => {
+    const w = window as unknown as { __cspViolations: string[] };
+    w.__cspViolations = [];
+    document.addEventListener('securitypolicyviolation', (e) => {
+      w.__cspViolations.push(`${e.violatedDirective} blocked ${e.blockedURI || '(inline)'}`);
+    });
+  });
+  const page = await context.newPage();
+  const consoleErrors: string[] = [];
+  page.on('console', (msg) => {
+    if (msg.type() === 'error') consoleErrors.push(msg.text());
+  });
+  page.on('pageerror', (err) => consoleErrors.push(`pageerror: ${err.message}`));
+  return {
+    page,
+    context,
+    consoleErrors,
+    cspViolations: () => page.evaluate(() => (window as unknown as { __cspViolations: string[] }).__cspViolations),
+  };
+}
+
+/** axe-core's findings of serious or critical impact, as readable lines. */
+export async function seriousAccessibilityViolations(page: Page): Promise<string[]> {
+  const results = await new AxeBuilder({ page }).withTags(['wcag2a', 'wcag2aa', 'wcag21a', 'wcag21aa']).analyze();
+  return results.violations
+    .filter((v) => v.impact === 'serious' || v.impact === 'critical')
+    .map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).slice(0, 3).join(', ')}`);
+}

@@ -1,0 +1,43 @@
+import { Writable } from 'node:stream';
+import pino from 'pino';
+import type { Express } from 'express';
+import { createApp } from '../../server/app';
+import { loadConfig, type Config } from '../../server/config';
+import { createDatabase, type Database } from '../../server/db/database';
+import type { Logger } from '../../server/logger';
+
+/** Config for tests: the test database from scripts/test.sh, overridable per test. */
+export function testConfig(overrides: Partial<Config> = {}): Config {
+  return { ...loadConfig({ ...process.env, NODE_ENV: 'test' }), ...overrides };
+}
+
+/** A logger whose lines are kept in memory so tests can read what was logged. */
+export function memoryLogger(): { logger: Logger; lines: string[] } {
+  const lines: string[] = [];
+  const stream = new Writable({
+    write(chunk, _enc, done) {
+      lines.push(String(chunk));
+      done();
+    },
+  });
+  return { logger: pino({ level: 'info' }, stream), lines };
+}
+
+export type TestApp = { app: Express; db: Database; config: Config; logLines: string[] };
+
+/** The real app on the real test database (already migrated by scripts/test.sh). */
+export function buildTestApp(overrides: Partial<Config> = {}): TestApp {
+  const config = testConfig(overrides);
+  const db = createDatabase(config.databaseUrl);
+  const { logger, lines } = memoryLogger();
+  return { app: createApp({ config, db, logger }), db, config, logLines: lines };
+}
+
+/** Empties every application table (keeps the migration record) so tests start clean. */
+export async function resetDatabase(db: Database): Promise<void> {
+  const [rows] = await db.sequelize.query(
+    "SELECT tablename FROM pg_tables WHERE schemaname = 'public' AND tablename <> 'migrations_meta'",
+  );
+  const tables = (rows as Array<{ tablename: string }>).map((r) => `"${r.tablename}"`);
+  if (tables.length) await db.sequelize.query(`TRUNCATE ${tables.join(', ')} RESTART IDENTITY CASCADE`);
+}
