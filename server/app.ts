@@ -1,4 +1,5 @@
 import compression from 'compression';
+import cors from 'cors';
 import express, { Router, type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
@@ -34,6 +35,7 @@ export const CONTENT_SECURITY_POLICY = {
 
 function apiRouter(deps: AppDeps): Router {
   const api = Router();
+  if (deps.config.devWebOrigin) api.use(cors({ origin: deps.config.devWebOrigin, credentials: true }));
   api.use(jsonRateLimit(deps.config.apiRateLimit));
   api.use(express.json({ limit: deps.config.jsonBodyLimit }));
   api.use('/health', healthRouter(deps));
@@ -49,7 +51,17 @@ export function createApp(deps: AppDeps): Express {
   app.set('trust proxy', deps.config.trustProxy);
   app.use(helmet({ contentSecurityPolicy: { useDefaults: false, directives: CONTENT_SECURITY_POLICY } }));
   app.use(compression());
-  app.use(pinoHttp({ logger: deps.logger, autoLogging: deps.config.logLevel !== 'silent' }));
+  app.use(
+    pinoHttp({
+      logger: deps.logger,
+      autoLogging: deps.config.logLevel !== 'silent',
+      // One short line per request: no headers, so cookies and tokens never reach the logs.
+      serializers: {
+        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
+      },
+    }),
+  );
   app.use('/api', apiRouter(deps));
   app.use(webAppRouter(deps.config.webDistDir));
   app.use(errorHandler(deps.logger));

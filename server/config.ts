@@ -21,6 +21,8 @@ const envSchema = z.object({
   API_RATE_LIMIT_WINDOW_MS: z.coerce.number().int().min(1000).default(60_000),
   WEB_DIST_DIR: z.string().default('dist'),
   TRUST_PROXY: booleanish.default(false),
+  /** Development only: the Expo dev server's origin, allowed to call the API with cookies. */
+  DEV_WEB_ORIGIN: z.url({ error: 'DEV_WEB_ORIGIN must be a URL such as http://127.0.0.1:8081' }).optional(),
 });
 
 export type Config = {
@@ -33,6 +35,7 @@ export type Config = {
   apiRateLimit: { max: number; windowMs: number };
   webDistDir: string;
   trustProxy: boolean;
+  devWebOrigin: string | null;
   version: string;
 };
 
@@ -62,6 +65,7 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     apiRateLimit: { max: e.API_RATE_LIMIT_MAX, windowMs: e.API_RATE_LIMIT_WINDOW_MS },
     webDistDir: path.resolve(e.WEB_DIST_DIR),
     trustProxy: e.TRUST_PROXY,
+    devWebOrigin: e.NODE_ENV === 'production' ? null : (e.DEV_WEB_ORIGIN ?? null),
     version: process.env.npm_package_version ?? '0.1.0',
   };
 }
