@@ -3,16 +3,29 @@ import cors from 'cors';
 import express, { Router, type Express } from 'express';
 import helmet from 'helmet';
 import { pinoHttp } from 'pino-http';
+import { csrf } from './auth/csrf';
+import { FAKE_GITHUB_MOUNT, fakeGithubRouter } from './auth/fakeGithub';
+import { createPassport, type TunePassport } from './auth/passport';
+import { sessionMiddleware } from './auth/session';
 import type { Config } from './config';
 import type { Database } from './db/database';
 import type { Logger } from './logger';
+import { RouteTable } from './middleware/access';
 import { apiNotFound, errorHandler } from './middleware/errorHandler';
 import { jsonRateLimit } from './middleware/rateLimit';
+import { adminRouter } from './routes/admin';
+import { authRouter } from './routes/auth';
 import { catalogRouter } from './routes/catalog';
+import { devRouter } from './routes/dev';
 import { healthRouter } from './routes/health';
+import { meRouter } from './routes/me';
+import { racersRouter } from './routes/racers';
+import type { Mailer } from './services/mail';
 import { webAppRouter } from './webApp';
 
-export type AppDeps = { config: Config; db: Database; logger: Logger };
+export type AppDeps = { config: Config; db: Database; logger: Logger; mailer: Mailer };
+/** What routers get: the app's dependencies plus its route table and passport instance. */
+export type RouterDeps = AppDeps & { routes: RouteTable; passport: TunePassport };
 
 /**
  * The Content-Security-Policy the exported web app runs under. React Native Web writes its
@@ -33,12 +46,21 @@ export const CONTENT_SECURITY_POLICY = {
   upgradeInsecureRequests: null,
 };
 
-function apiRouter(deps: AppDeps): Router {
+function apiRouter(deps: RouterDeps): Router {
   const api = Router();
   if (deps.config.devWebOrigin) api.use(cors({ origin: deps.config.devWebOrigin, credentials: true }));
   api.use(jsonRateLimit(deps.config.apiRateLimit));
   api.use(express.json({ limit: deps.config.jsonBodyLimit }));
+  api.use(sessionMiddleware(deps.config, deps.db));
+  api.use(deps.passport.initialize());
+  api.use(deps.passport.session());
+  api.use(csrf.csrfSynchronisedProtection);
   api.use('/health', healthRouter(deps));
+  api.use('/auth', authRouter(deps));
+  api.use('/me', meRouter(deps));
+  api.use('/racers', racersRouter(deps));
+  api.use('/admin', adminRouter(deps));
+  if (deps.config.nodeEnv !== 'production') api.use('/dev', devRouter(deps));
   api.use('/', catalogRouter(deps));
   api.use(apiNotFound);
   return api;
@@ -46,9 +68,12 @@ function apiRouter(deps: AppDeps): Router {
 
 /** Builds the Express app: middleware, /api, the web app, the error handler. Never listens. */
 export function createApp(deps: AppDeps): Express {
+  const routes = new RouteTable();
+  const routerDeps: RouterDeps = { ...deps, routes, passport: createPassport(deps) };
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', deps.config.trustProxy);
+  app.locals.routeTable = routes;
   app.use(helmet({ contentSecurityPolicy: { useDefaults: false, directives: CONTENT_SECURITY_POLICY } }));
   app.use(compression());
   app.use(
@@ -57,12 +82,13 @@ export function createApp(deps: AppDeps): Express {
       autoLogging: deps.config.logLevel !== 'silent',
       // One short line per request: no headers, so cookies and tokens never reach the logs.
       serializers: {
-        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url }),
+        req: (req: { method: string; url: string }) => ({ method: req.method, url: req.url.split('?')[0] }),
         res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
       },
     }),
   );
-  app.use('/api', apiRouter(deps));
+  if (deps.config.github?.useFakeProvider) app.use(FAKE_GITHUB_MOUNT, fakeGithubRouter(deps.config));
+  app.use('/api', apiRouter(routerDeps));
   app.use(webAppRouter(deps.config.webDistDir));
   app.use(errorHandler(deps.logger));
   return app;

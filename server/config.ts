@@ -21,6 +21,17 @@ const envSchema = z.object({
   API_RATE_LIMIT_WINDOW_MS: z.coerce.number().int().min(1000).default(60_000),
   WEB_DIST_DIR: z.string().default('dist'),
   TRUST_PROXY: booleanish.default(false),
+  PUBLIC_URL: z.url({ error: 'PUBLIC_URL must be the address people open, e.g. https://tunefork.example' }).optional(),
+  SESSION_SECRET: z.string().min(32, 'SESSION_SECRET must be at least 32 characters').optional(),
+  BCRYPT_COST: z.coerce.number().int().min(4).max(15).optional(),
+  GITHUB_CLIENT_ID: z.string().min(1).optional(),
+  GITHUB_CLIENT_SECRET: z.string().min(1).optional(),
+  FAKE_GITHUB: booleanish.optional(),
+  SMTP_URL: z.string().regex(/^smtps?:\/\//, 'SMTP_URL must start with smtp:// or smtps://').optional(),
+  MAIL_FROM: z.string().min(3).default('Tunefork <no-reply@tunefork.invalid>'),
+  FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(0),
+  AUTH_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(20),
+  AUTH_RATE_LIMIT_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60_000),
   /** Development only: the Expo dev server's origin, allowed to call the API with cookies. */
   DEV_WEB_ORIGIN: z.url({ error: 'DEV_WEB_ORIGIN must be a URL such as http://127.0.0.1:8081' }).optional(),
 });
@@ -36,8 +47,35 @@ export type Config = {
   webDistDir: string;
   trustProxy: boolean;
   devWebOrigin: string | null;
+  publicUrl: string;
+  sessionSecret: string;
+  bcryptCost: number;
+  github: { clientId: string; clientSecret: string; useFakeProvider: boolean } | null;
+  mail: { smtpUrl: string | null; from: string; fakeSmtpPort: number };
+  authRateLimit: { max: number; windowMs: number };
   version: string;
 };
+
+/** Used only outside production, where a fixed secret is harmless and keeps sessions across restarts. */
+const DEVELOPMENT_SESSION_SECRET = 'tunefork-development-session-secret-not-for-production';
+const FAKE_GITHUB_CLIENT = { clientId: 'tunefork-local', clientSecret: 'tunefork-local-secret' };
+
+function githubSettings(e: z.infer<typeof envSchema>): Config['github'] {
+  if (e.GITHUB_CLIENT_ID && e.GITHUB_CLIENT_SECRET) {
+    return { clientId: e.GITHUB_CLIENT_ID, clientSecret: e.GITHUB_CLIENT_SECRET, useFakeProvider: false };
+  }
+  // The local fake provider never runs in production unless explicitly enabled.
+  const fake = e.FAKE_GITHUB ?? e.NODE_ENV !== 'production';
+  return fake ? { ...FAKE_GITHUB_CLIENT, useFakeProvider: true } : null;
+}
+
+function productionProblems(e: z.infer<typeof envSchema>): string[] {
+  if (e.NODE_ENV !== 'production') return [];
+  const problems: string[] = [];
+  if (!e.SESSION_SECRET) problems.push('SESSION_SECRET: required in production (32+ random characters)');
+  if (e.BCRYPT_COST !== undefined && e.BCRYPT_COST < 10) problems.push('BCRYPT_COST: must be at least 10 in production');
+  return problems;
+}
 
 export class ConfigError extends Error {
   constructor(public readonly problems: string[]) {
@@ -55,6 +93,8 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     );
   }
   const e = parsed.data;
+  const problems = productionProblems(e);
+  if (problems.length) throw new ConfigError(problems);
   return {
     nodeEnv: e.NODE_ENV,
     host: e.HOST,
@@ -66,6 +106,12 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     webDistDir: path.resolve(e.WEB_DIST_DIR),
     trustProxy: e.TRUST_PROXY,
     devWebOrigin: e.NODE_ENV === 'production' ? null : (e.DEV_WEB_ORIGIN ?? null),
+    publicUrl: (e.PUBLIC_URL ?? `http://${e.HOST}:${e.PORT}`).replace(/\/$/, ''),
+    sessionSecret: e.SESSION_SECRET ?? DEVELOPMENT_SESSION_SECRET,
+    bcryptCost: e.BCRYPT_COST ?? (e.NODE_ENV === 'test' ? 4 : 12),
+    github: githubSettings(e),
+    mail: { smtpUrl: e.SMTP_URL ?? null, from: e.MAIL_FROM, fakeSmtpPort: e.FAKE_SMTP_PORT },
+    authRateLimit: { max: e.AUTH_RATE_LIMIT_MAX, windowMs: e.AUTH_RATE_LIMIT_WINDOW_MS },
     version: process.env.npm_package_version ?? '0.1.0',
   };
 }

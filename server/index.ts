@@ -3,6 +3,7 @@ import { ConfigError, loadConfig } from './config';
 import { createApp } from './app';
 import { createDatabase } from './db/database';
 import { createLogger } from './logger';
+import { createMailer } from './services/mail';
 
 async function main(): Promise<void> {
   let config;
@@ -19,7 +20,8 @@ async function main(): Promise<void> {
   const db = createDatabase(config.databaseUrl);
   await db.ping(5_000);
 
-  const app = createApp({ config, db, logger });
+  const mailer = createMailer(config, db, logger);
+  const app = createApp({ config, db, logger, mailer });
   const server: Server = app.listen(config.port, config.host, () => {
     logger.info(`Tunefork is listening on http://${config.host}:${config.port}`);
   });
@@ -34,7 +36,10 @@ async function main(): Promise<void> {
     closing = true;
     logger.info(`${signal}: closing the HTTP server, then the database pool`);
     server.close(() => {
-      db.close().finally(() => process.exit(0));
+      mailer
+        .close()
+        .then(() => db.close())
+        .finally(() => process.exit(0));
     });
     server.closeIdleConnections();
     setTimeout(() => process.exit(1), 10_000).unref();

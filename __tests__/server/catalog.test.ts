@@ -11,7 +11,7 @@ describe('demo world and catalog', () => {
     await resetDatabase(t.db);
   });
   afterAll(async () => {
-    await t.db.close();
+    await t.close();
   });
 
   it('lists nothing on an empty database', async () => {
@@ -22,8 +22,8 @@ describe('demo world and catalog', () => {
   });
 
   it('seeds the demo world idempotently: a second run adds nothing', async () => {
-    await seedDemoWorld(t.db);
-    await seedDemoWorld(t.db);
+    await seedDemoWorld(t.db, { bcryptCost: 4 });
+    await seedDemoWorld(t.db, { bcryptCost: 4 });
     expect(await t.db.models.Kit.count()).toBe(DEMO_KITS.length);
     expect(await t.db.models.Track.count()).toBe(DEMO_TRACKS.length);
     expect(await isDatabaseEmpty(t.db)).toBe(false);

@@ -8,7 +8,7 @@ describe('API error shape', () => {
     t = buildTestApp();
   });
   afterAll(async () => {
-    await t.db.close();
+    await t.close();
   });
 
   it('answers an unknown /api route with a JSON 404', async () => {
@@ -37,7 +37,7 @@ describe('API error shape', () => {
       expect(res.status).toBe(413);
       expect(apiErrorBodySchema.parse(res.body).error.code).toBe('payload_too_large');
     } finally {
-      await small.db.close();
+      await small.close();
     }
   });
 
@@ -72,7 +72,7 @@ describe('API rate limit', () => {
       expect(body.error.details?.retryAfterSeconds).toBeGreaterThan(0);
       expect(body.error.message).toMatch(/try again in \d+ s/i);
     } finally {
-      await t.db.close();
+      await t.close();
     }
   });
 });

@@ -30,7 +30,7 @@ describe('GET /api/health', () => {
     t = buildTestApp();
   });
   afterAll(async () => {
-    await t.db.close();
+    await t.close();
   });
 
   it('answers ok with the database reachable', async () => {

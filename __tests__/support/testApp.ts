@@ -5,10 +5,16 @@ import { createApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
 import { createDatabase, type Database } from '../../server/db/database';
 import type { Logger } from '../../server/logger';
+import { createMailer, type Mailer } from '../../server/services/mail';
 
 /** Config for tests: the test database from scripts/test.sh, overridable per test. */
 export function testConfig(overrides: Partial<Config> = {}): Config {
-  return { ...loadConfig({ ...process.env, NODE_ENV: 'test' }), ...overrides };
+  // Auth rate limits are lifted unless a test is about them: one test file signs in many times.
+  return {
+    ...loadConfig({ ...process.env, NODE_ENV: 'test' }),
+    authRateLimit: { max: 10_000, windowMs: 60_000 },
+    ...overrides,
+  };
 }
 
 /** A logger whose lines are kept in memory so tests can read what was logged. */
@@ -23,14 +29,33 @@ export function memoryLogger(): { logger: Logger; lines: string[] } {
   return { logger: pino({ level: 'info' }, stream), lines };
 }
 
-export type TestApp = { app: Express; db: Database; config: Config; logLines: string[] };
+export type TestApp = {
+  app: Express;
+  db: Database;
+  mailer: Mailer;
+  config: Config;
+  logLines: string[];
+  /** Closes the mailer (and its fake SMTP server) and the database pools. */
+  close(): Promise<void>;
+};
 
 /** The real app on the real test database (already migrated by scripts/test.sh). */
 export function buildTestApp(overrides: Partial<Config> = {}): TestApp {
   const config = testConfig(overrides);
   const db = createDatabase(config.databaseUrl);
   const { logger, lines } = memoryLogger();
-  return { app: createApp({ config, db, logger }), db, config, logLines: lines };
+  const mailer = createMailer(config, db, logger);
+  return {
+    app: createApp({ config, db, logger, mailer }),
+    db,
+    mailer,
+    config,
+    logLines: lines,
+    async close() {
+      await mailer.close();
+      await db.close();
+    },
+  };
 }
 
 /** Empties every application table (keeps the migration record) so tests start clean. */

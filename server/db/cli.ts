@@ -27,12 +27,12 @@ async function main(command: string | undefined): Promise<void> {
         break;
       }
       case 'seed':
-        await seedDemoWorld(db);
+        await seedDemoWorld(db, { bcryptCost: config.bcryptCost });
         console.log('demo world seeded');
         break;
       case 'seed-if-empty':
         if (await isDatabaseEmpty(db)) {
-          await seedDemoWorld(db);
+          await seedDemoWorld(db, { bcryptCost: config.bcryptCost });
           console.log('empty database: demo world seeded');
         } else {
           console.log('database has data: demo seed skipped');

@@ -1,9 +1,12 @@
+import { Pool } from 'pg';
 import { Sequelize } from 'sequelize';
 import { initModels, type Models } from '../models';
 
 export type Database = {
   sequelize: Sequelize;
   models: Models;
+  /** A plain pg pool beside Sequelize's, for the session store and raw hot-path queries. */
+  pool: Pool;
   /** Resolves when a trivial query round-trips within `timeoutMs`; rejects otherwise. */
   ping(timeoutMs?: number): Promise<void>;
   close(): Promise<void>;
@@ -19,9 +22,13 @@ export function createDatabase(url: string, options: { logging?: (sql: string) =
     define: { underscored: true },
   });
   const models = initModels(sequelize);
+  const pool = new Pool({ connectionString: url, max: 5, connectionTimeoutMillis: 3_000 });
+  // An idle client dropped by a database restart must not crash the process.
+  pool.on('error', () => {});
   return {
     sequelize,
     models,
+    pool,
     async ping(timeoutMs = 2_000) {
       let timer: NodeJS.Timeout | undefined;
       const timeout = new Promise<never>((_, reject) => {
@@ -33,6 +40,8 @@ export function createDatabase(url: string, options: { logging?: (sql: string) =
         clearTimeout(timer);
       }
     },
-    close: () => sequelize.close(),
+    async close() {
+      await Promise.allSettled([sequelize.close(), pool.end()]);
+    },
   };
 }

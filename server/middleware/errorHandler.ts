@@ -25,6 +25,9 @@ function fromBodyParser(err: { type?: string; status?: number }): ApiError | nul
 
 function toApiError(err: unknown): ApiError | null {
   if (err instanceof ApiError) return err;
+  if (err && typeof err === 'object' && (err as { code?: string }).code === 'EBADCSRFTOKEN') {
+    return new ApiError(403, 'csrf_invalid', 'Your session token is missing or out of date. Reload the page and try again.');
+  }
   if (err instanceof ZodError) {
     const details: Record<string, string> = {};
     for (const issue of err.issues) details[issue.path.join('.') || '_'] = issue.message;

@@ -1,14 +1,16 @@
 import { Router } from 'express';
-import type { AppDeps } from '../app';
+import type { RouterDeps } from '../app';
+import { declareRoutes } from '../middleware/access';
 import { listKits, listTracks } from '../services/catalog';
 
-export function catalogRouter({ db }: AppDeps): Router {
+export function catalogRouter(deps: RouterDeps): Router {
   const router = Router();
-  router.get('/kits', async (_req, res) => {
-    res.json({ kits: await listKits(db) });
+  const r = declareRoutes(router, deps.routes, '/');
+  r.get('/kits', 'public', async (_req, res) => {
+    res.json({ kits: await listKits(deps.db) });
   });
-  router.get('/tracks', async (_req, res) => {
-    res.json({ tracks: await listTracks(db) });
+  r.get('/tracks', 'public', async (_req, res) => {
+    res.json({ tracks: await listTracks(deps.db) });
   });
   return router;
 }

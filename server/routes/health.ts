@@ -1,11 +1,13 @@
 import { Router } from 'express';
-import type { AppDeps } from '../app';
+import type { RouterDeps } from '../app';
+import { declareRoutes } from '../middleware/access';
 import { checkHealth } from '../services/health';
 
-export function healthRouter({ db, config }: AppDeps): Router {
+export function healthRouter(deps: RouterDeps): Router {
   const router = Router();
-  router.get('/', async (_req, res) => {
-    res.set('Cache-Control', 'no-store').json(await checkHealth(db, config.version));
+  const r = declareRoutes(router, deps.routes, '/health');
+  r.get('/', 'public', async (_req, res) => {
+    res.set('Cache-Control', 'no-store').json(await checkHealth(deps.db, deps.config.version));
   });
   return router;
 }

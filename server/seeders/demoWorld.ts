@@ -57,9 +57,25 @@ export const DEMO_TRACKS: Array<{ slug: string; name: string; surface: TrackType
   },
 ];
 
-export const DEMO_RACERS: Array<{ handle: string; displayName: string; role: Role; homeTrack: string; bio: string }> = [
+/**
+ * Demo accounts. The passwords are for trying Tunefork locally and are listed in the README;
+ * the seeder only ever runs against the embedded development database or when asked to.
+ */
+export const DEMO_RACERS: Array<{
+  handle: string;
+  displayName: string;
+  role: Role;
+  homeTrack: string;
+  bio: string;
+  email: string;
+  password: string;
+  classesRaced: VehicleClassKey[];
+}> = [
   {
     handle: 'tamsin_q',
+    email: 'tamsin@racers.example',
+    password: 'kiln-timing-desk-7',
+    classesRaced: ['buggy-1-10-4wd', 'buggy-1-8-electric'],
     displayName: 'Tamsin Quarrie',
     role: 'admin',
     homeTrack: 'Old Kiln Indoor',
@@ -67,6 +83,9 @@ export const DEMO_RACERS: Array<{ handle: string; displayName: string; role: Rol
   },
   {
     handle: 'oskar-velde',
+    email: 'oskar@racers.example',
+    password: 'saltmarsh-marshal-4',
+    classesRaced: ['buggy-1-8-nitro', 'truggy-1-8-nitro'],
     displayName: 'Oskar Velde',
     role: 'moderator',
     homeTrack: 'Saltmarsh Raceway',
@@ -74,6 +93,9 @@ export const DEMO_RACERS: Array<{ handle: string; displayName: string; role: Rol
   },
   {
     handle: 'juno_braithwick',
+    email: 'juno@racers.example',
+    password: 'hollow-pines-laps-2',
+    classesRaced: ['buggy-1-8-electric', 'truggy-1-8-electric'],
     displayName: 'Juno Braithwick',
     role: 'racer',
     homeTrack: 'Hollow Pines Circuit',
@@ -81,6 +103,9 @@ export const DEMO_RACERS: Array<{ handle: string; displayName: string; role: Rol
   },
   {
     handle: 'pell-strand',
+    email: 'pell@racers.example',
+    password: 'brackwater-ruts-9',
+    classesRaced: ['truggy-1-8-nitro'],
     displayName: 'Pell Strand',
     role: 'racer',
     homeTrack: 'Brackwater Dunes',
@@ -88,6 +113,9 @@ export const DEMO_RACERS: Array<{ handle: string; displayName: string; role: Rol
   },
   {
     handle: 'rafi_new',
+    email: 'rafi@racers.example',
+    password: 'first-season-stoat-8e',
+    classesRaced: ['buggy-1-8-electric'],
     displayName: 'Rafi Lindmoor',
     role: 'racer',
     homeTrack: 'Old Kiln Indoor',

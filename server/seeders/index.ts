@@ -1,4 +1,5 @@
 import type { Database } from '../db/database';
+import { hashPassword } from '../services/passwords';
 import { DEMO_KITS, DEMO_MAKERS, DEMO_RACERS, DEMO_TRACKS } from './demoWorld';
 
 /** True when nothing a person could have created is in the database yet. */
@@ -11,8 +12,9 @@ export async function isDatabaseEmpty(db: Database): Promise<boolean> {
  * Writes the invented demo world. Idempotent: rows are matched by slug or handle and
  * existing ones are left as they are, so running it twice changes nothing.
  */
-export async function seedDemoWorld(db: Database): Promise<void> {
+export async function seedDemoWorld(db: Database, options: { bcryptCost: number }): Promise<void> {
   const { Maker, Kit, Track, User } = db.models;
+  const passwordHashes = await Promise.all(DEMO_RACERS.map((r) => hashPassword(r.password, options.bcryptCost)));
   await db.sequelize.transaction(async (transaction) => {
     const makerIds = new Map<string, number>();
     for (const m of DEMO_MAKERS) {
@@ -31,8 +33,12 @@ export async function seedDemoWorld(db: Database): Promise<void> {
     for (const t of DEMO_TRACKS) {
       await Track.findOrCreate({ where: { slug: t.slug }, defaults: { ...t }, transaction });
     }
-    for (const r of DEMO_RACERS) {
-      await User.findOrCreate({ where: { handle: r.handle }, defaults: { ...r }, transaction });
+    for (const [i, { password: _password, ...r }] of DEMO_RACERS.entries()) {
+      await User.findOrCreate({
+        where: { handle: r.handle },
+        defaults: { ...r, passwordHash: passwordHashes[i], emailVerifiedAt: new Date() },
+        transaction,
+      });
     }
   });
 }

@@ -3,3 +3,4 @@ export * from './health';
 export * from './vehicleClasses';
 export * from './trackTypes';
 export * from './catalog';
+export * from './auth';

@@ -1,5 +1,6 @@
 import type { MigrationContext } from '../migrator';
 import * as demoWorld from './20261202T0000-catalog-and-racers';
+import * as accounts from './20261202T0100-accounts';
 
 export type Migration = {
   name: string;
@@ -10,4 +11,5 @@ export type Migration = {
 /** Every migration, oldest first. A new file is added here with a timestamped name. */
 export const migrations: Migration[] = [
   { name: '20261202T0000-catalog-and-racers', ...demoWorld },
+  { name: '20261202T0100-accounts', ...accounts },
 ];

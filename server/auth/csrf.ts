@@ -1,0 +1,15 @@
+import { csrfSync } from 'csrf-sync';
+import type { Request } from 'express';
+
+/**
+ * Synchroniser-token CSRF protection: the token lives in the session and every state-changing
+ * request must echo it in the X-CSRF-Token header. GET, HEAD and OPTIONS are exempt.
+ */
+export const csrf = csrfSync({
+  getTokenFromRequest: (req: Request) => {
+    const header = req.headers['x-csrf-token'];
+    return Array.isArray(header) ? header[0] : header;
+  },
+});
+
+export const CSRF_HEADER = 'X-CSRF-Token';

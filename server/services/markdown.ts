@@ -1,0 +1,32 @@
+import { marked } from 'marked';
+import sanitizeHtml from 'sanitize-html';
+
+const LINK_REL = 'nofollow ugc noopener';
+
+/** Only formatting that reads well in a bio, note or comment; nothing that runs or embeds. */
+const SANITIZE_OPTIONS: sanitizeHtml.IOptions = {
+  allowedTags: ['p', 'br', 'strong', 'em', 'del', 'code', 'pre', 'blockquote', 'ul', 'ol', 'li', 'a', 'h3', 'h4', 'hr'],
+  allowedAttributes: { a: ['href', 'title', 'rel'] },
+  allowedSchemes: ['http', 'https', 'mailto'],
+  allowProtocolRelative: false,
+  disallowedTagsMode: 'discard',
+  transformTags: {
+    // Page and section headings belong to the app; a note's headings sit below them.
+    h1: 'h3',
+    h2: 'h3',
+    h5: 'h4',
+    h6: 'h4',
+    a: (tagName, attribs) => ({ tagName, attribs: { ...attribs, rel: LINK_REL } }),
+  },
+};
+
+/** Renders racer-written markdown to HTML that is safe to insert into a page. */
+export function renderMarkdown(markdown: string): string {
+  const html = marked.parse(markdown, { async: false, gfm: true, breaks: true });
+  return sanitizeHtml(html, SANITIZE_OPTIONS);
+}
+
+/** Counts links a piece of markdown will render, for spam limits. */
+export function countRenderedLinks(markdown: string): number {
+  return (renderMarkdown(markdown).match(/<a\s/g) ?? []).length;
+}
