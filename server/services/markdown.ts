@@ -16,7 +16,13 @@ const SANITIZE_OPTIONS: sanitizeHtml.IOptions = {
     h2: 'h3',
     h5: 'h4',
     h6: 'h4',
-    a: (tagName, attribs) => ({ tagName, attribs: { ...attribs, rel: LINK_REL } }),
+    // Only absolute web and mail links survive: a relative or odd href in racer content is never
+    // what the author meant and could be read differently by different browsers.
+    a: (tagName, attribs) => {
+      const { href, ...rest } = attribs;
+      const safe = typeof href === 'string' && /^(https?:\/\/|mailto:)/i.test(href);
+      return { tagName, attribs: safe ? { ...rest, href, rel: LINK_REL } : { ...rest, rel: LINK_REL } };
+    },
   },
 };
 

@@ -1,0 +1,121 @@
+import type { Express } from 'express';
+import request from 'supertest';
+import type { Access, RouteSpec, RouteTable } from '../../server/middleware/access';
+import { createRacer, csrfAgent, signIn, type SessionAgent } from '../support/accounts';
+import { buildTestApp, type TestApp } from '../support/testApp';
+
+/**
+ * Who may call every /api route. A route missing here, or listed here but not registered, fails
+ * the test: adding a route means deciding its access in this table.
+ */
+const EXPECTED: Record<string, Access> = {
+  'GET /api/health': 'public',
+  'GET /api/auth/csrf': 'public',
+  'POST /api/auth/sign-up': 'public',
+  'POST /api/auth/sign-in': 'public',
+  'POST /api/auth/sign-out': 'public',
+  'POST /api/auth/verify-email': 'public',
+  'POST /api/auth/resend-verification': 'public',
+  'POST /api/auth/forgot-password': 'public',
+  'POST /api/auth/reset-password': 'public',
+  'GET /api/auth/github': 'public',
+  'GET /api/auth/github/link': 'signedIn',
+  'GET /api/auth/github/callback': 'public',
+  'GET /api/me': 'public',
+  'PATCH /api/me/profile': 'signedIn',
+  'POST /api/me/email': 'signedIn',
+  'POST /api/me/password': 'signedIn',
+  'POST /api/me/sign-out-everywhere': 'signedIn',
+  'DELETE /api/me/github': 'signedIn',
+  'GET /api/racers/:handle': 'public',
+  'GET /api/admin/users': 'admin',
+  'PATCH /api/admin/users/:id/role': 'admin',
+  'POST /api/admin/users/:id/suspend': 'admin',
+  'POST /api/admin/users/:id/unsuspend': 'admin',
+  'GET /api/dev/mailbox': 'public',
+  'GET /api/kits': 'public',
+  'GET /api/tracks': 'public',
+};
+
+type Layer = { route?: { methods: Record<string, boolean> }; handle?: { stack?: Layer[] } };
+
+/** Counts every (method, route) Express itself has registered, however it was added. */
+function countExpressRoutes(stack: Layer[]): number {
+  let n = 0;
+  for (const layer of stack) {
+    if (layer.route) n += Object.keys(layer.route.methods).filter((m) => m !== '_all').length;
+    else if (layer.handle?.stack) n += countExpressRoutes(layer.handle.stack);
+  }
+  return n;
+}
+
+const ROLES = ['anonymous', 'racer', 'moderator', 'admin'] as const;
+type Caller = (typeof ROLES)[number];
+
+function allowed(access: Access, who: Caller): boolean {
+  const rank = { anonymous: -1, racer: 0, moderator: 1, admin: 2 }[who];
+  return { public: true, signedIn: rank >= 0, moderator: rank >= 1, admin: rank >= 2 }[access];
+}
+
+let t: TestApp;
+let accounts: Record<Exclude<Caller, 'anonymous'>, { handle: string; password: string }>;
+
+beforeAll(async () => {
+  t = buildTestApp();
+  const [racer, moderator, admin] = await Promise.all([
+    createRacer(t.db, { role: 'racer' }),
+    createRacer(t.db, { role: 'moderator' }),
+    createRacer(t.db, { role: 'admin' }),
+  ]);
+  accounts = { racer, moderator, admin };
+});
+
+/** A fresh session per call: some routes (sign-out, sign-out-everywhere) end the caller's session. */
+function caller(role: Caller): Promise<SessionAgent> {
+  return role === 'anonymous' ? csrfAgent(t.app) : signIn(t.app, accounts[role].handle, accounts[role].password);
+}
+afterAll(async () => {
+  await t.close();
+});
+
+function routeTable(app: Express): RouteSpec[] {
+  return (app.locals.routeTable as RouteTable).routes;
+}
+
+describe('route × role access', () => {
+  it('has an access rule in this table for exactly the registered routes', () => {
+    const registered = Object.fromEntries(routeTable(t.app).map((r) => [`${r.method} ${r.path}`, r.access]));
+    expect(registered).toEqual(EXPECTED);
+  });
+
+  it('registers no route outside the declared table (Express sees the same number of routes, bar the fake provider)', () => {
+    const stack = (t.app as unknown as { router: { stack: Layer[] } }).router.stack;
+    // Outside /api: the fake provider's five endpoints and the web app's deep-link fallback.
+    const nonApiRoutes = 5 + 1;
+    expect(countExpressRoutes(stack)).toBe(routeTable(t.app).length + nonApiRoutes);
+  });
+
+  const cases = Object.entries(EXPECTED).flatMap(([key, access]) => ROLES.map((who) => ({ key, access, who })));
+  it.each(cases)('$key as $who: allowed = access "$access"', async ({ key, access, who }) => {
+    const [method, path] = key.split(' ');
+    const url = path.replace(':handle', 'no-such-racer').replace(':id', '999999');
+    const { agent, csrf } = await caller(who);
+    const res = await agent[method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](url).set('X-CSRF-Token', csrf).send({});
+    if (allowed(access, who)) {
+      expect([401, 403]).not.toContain(res.status);
+    } else {
+      expect(res.status).toBe(who === 'anonymous' ? 401 : 403);
+      expect(res.body.error.code).toBe(who === 'anonymous' ? 'unauthenticated' : 'forbidden');
+    }
+  });
+});
+
+describe('access responses', () => {
+  it('tells an anonymous caller to sign in, and a racer that the action is for admins', async () => {
+    const anon = await request(t.app).get('/api/admin/users');
+    expect(anon.status).toBe(401);
+    expect(anon.body.error.message).toBe('Sign in to do that.');
+    const racer = await (await caller('racer')).agent.get('/api/admin/users');
+    expect(racer.body.error.message).toBe('Only admins can do that.');
+  });
+});
