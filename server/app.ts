@@ -17,9 +17,11 @@ import { adminRouter } from './routes/admin';
 import { authRouter } from './routes/auth';
 import { catalogRouter } from './routes/catalog';
 import { devRouter } from './routes/dev';
+import { garageRouter } from './routes/garage';
 import { healthRouter } from './routes/health';
 import { meRouter } from './routes/me';
 import { racersRouter } from './routes/racers';
+import { setupsRouter } from './routes/setups';
 import type { Mailer } from './services/mail';
 import { webAppRouter } from './webApp';
 
@@ -60,6 +62,8 @@ function apiRouter(deps: RouterDeps): Router {
   api.use('/me', meRouter(deps));
   api.use('/racers', racersRouter(deps));
   api.use('/admin', adminRouter(deps));
+  api.use('/setups', setupsRouter(deps));
+  api.use('/', garageRouter(deps));
   if (deps.config.nodeEnv !== 'production') api.use('/dev', devRouter(deps));
   api.use('/', catalogRouter(deps));
   api.use(apiNotFound);
@@ -72,7 +76,8 @@ export function createApp(deps: AppDeps): Express {
   const routerDeps: RouterDeps = { ...deps, routes, passport: createPassport(deps) };
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', deps.config.trustProxy);
+  // Behind one reverse proxy, trust exactly one hop of X-Forwarded-For (not any client's claim).
+  app.set('trust proxy', deps.config.trustProxy ? 1 : false);
   app.locals.routeTable = routes;
   app.use(helmet({ contentSecurityPolicy: { useDefaults: false, directives: CONTENT_SECURITY_POLICY } }));
   app.use(compression());

@@ -32,6 +32,15 @@ const envSchema = z.object({
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(0),
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(20),
   AUTH_RATE_LIMIT_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60_000),
+  DATA_DIR: z.string().min(1).default('.data'),
+  STORAGE_DRIVER: z.enum(['local', 's3']).default('local'),
+  S3_ENDPOINT: z.url({ error: 'S3_ENDPOINT must be a URL such as http://127.0.0.1:4569' }).optional(),
+  S3_REGION: z.string().min(1).default('us-east-1'),
+  S3_BUCKET: z.string().min(3).optional(),
+  S3_ACCESS_KEY_ID: z.string().min(1).optional(),
+  S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
+  PHOTO_MAX_BYTES: z.coerce.number().int().min(10_000).default(12 * 1024 * 1024),
+  PHOTO_MAX_PIXELS: z.coerce.number().int().min(10_000).default(40_000_000),
   /** Development only: the Expo dev server's origin, allowed to call the API with cookies. */
   DEV_WEB_ORIGIN: z.url({ error: 'DEV_WEB_ORIGIN must be a URL such as http://127.0.0.1:8081' }).optional(),
 });
@@ -53,8 +62,26 @@ export type Config = {
   github: { clientId: string; clientSecret: string; useFakeProvider: boolean } | null;
   mail: { smtpUrl: string | null; from: string; fakeSmtpPort: number };
   authRateLimit: { max: number; windowMs: number };
+  dataDir: string;
+  storage:
+    | { driver: 'local'; directory: string }
+    | { driver: 's3'; endpoint: string | null; region: string; bucket: string; accessKeyId: string | null; secretAccessKey: string | null };
+  photos: { maxBytes: number; maxPixels: number };
   version: string;
 };
+
+function storageSettings(e: z.infer<typeof envSchema>): Config['storage'] {
+  if (e.STORAGE_DRIVER === 'local') return { driver: 'local', directory: path.resolve(e.DATA_DIR, 'photos') };
+  if (!e.S3_BUCKET) throw new ConfigError(['S3_BUCKET: required when STORAGE_DRIVER=s3']);
+  return {
+    driver: 's3',
+    endpoint: e.S3_ENDPOINT ?? null,
+    region: e.S3_REGION,
+    bucket: e.S3_BUCKET,
+    accessKeyId: e.S3_ACCESS_KEY_ID ?? null,
+    secretAccessKey: e.S3_SECRET_ACCESS_KEY ?? null,
+  };
+}
 
 /** Used only outside production, where a fixed secret is harmless and keeps sessions across restarts. */
 const DEVELOPMENT_SESSION_SECRET = 'tunefork-development-session-secret-not-for-production';
@@ -112,6 +139,9 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     github: githubSettings(e),
     mail: { smtpUrl: e.SMTP_URL ?? null, from: e.MAIL_FROM, fakeSmtpPort: e.FAKE_SMTP_PORT },
     authRateLimit: { max: e.AUTH_RATE_LIMIT_MAX, windowMs: e.AUTH_RATE_LIMIT_WINDOW_MS },
+    dataDir: path.resolve(e.DATA_DIR),
+    storage: storageSettings(e),
+    photos: { maxBytes: e.PHOTO_MAX_BYTES, maxPixels: e.PHOTO_MAX_PIXELS },
     version: process.env.npm_package_version ?? '0.1.0',
   };
 }

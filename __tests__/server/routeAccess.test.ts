@@ -34,7 +34,20 @@ const EXPECTED: Record<string, Access> = {
   'POST /api/admin/users/:id/unsuspend': 'admin',
   'GET /api/dev/mailbox': 'public',
   'GET /api/kits': 'public',
+  'GET /api/kits/:id/stock': 'public',
   'GET /api/tracks': 'public',
+  'GET /api/garage': 'signedIn',
+  'POST /api/cars': 'signedIn',
+  'PATCH /api/cars/:id': 'signedIn',
+  'DELETE /api/cars/:id': 'signedIn',
+  'POST /api/setups': 'signedIn',
+  'POST /api/setups/import': 'signedIn',
+  'GET /api/setups/:id': 'public',
+  'PATCH /api/setups/:id': 'signedIn',
+  'DELETE /api/setups/:id': 'signedIn',
+  'POST /api/setups/:id/revisions': 'signedIn',
+  'GET /api/setups/:id/export.json': 'public',
+  'GET /api/setups/:id/export.csv': 'public',
 };
 
 type Layer = { route?: { methods: Record<string, boolean> }; handle?: { stack?: Layer[] } };

@@ -65,5 +65,11 @@ export async function resetDatabase(db: Database): Promise<void> {
     "SELECT tablename FROM pg_tables WHERE schemaname = 'public' AND tablename <> 'migrations_meta'",
   );
   const tables = (rows as Array<{ tablename: string }>).map((r) => `"${r.tablename}"`);
-  if (tables.length) await db.sequelize.query(`TRUNCATE ${tables.join(', ')} RESTART IDENTITY CASCADE`);
+  if (!tables.length) return;
+  // setup_revisions refuses TRUNCATE by trigger; a test database reset is the one place allowed to
+  // wipe it, by switching triggers off for this transaction only.
+  await db.sequelize.transaction(async (transaction) => {
+    await db.sequelize.query('SET LOCAL session_replication_role = replica', { transaction });
+    await db.sequelize.query(`TRUNCATE ${tables.join(', ')} RESTART IDENTITY CASCADE`, { transaction });
+  });
 }

@@ -8,6 +8,7 @@ import {
   type NonAttribute,
   type Sequelize,
 } from 'sequelize';
+import type { StoredSetupValues } from '../../shared/types/setups';
 import type { VehicleClassKey } from '../../shared/types/vehicleClasses';
 import type { Maker } from './Maker';
 
@@ -18,6 +19,11 @@ export class Kit extends Model<InferAttributes<Kit>, InferCreationAttributes<Kit
   declare makerId: ForeignKey<Maker['id']>;
   declare vehicleClass: VehicleClassKey;
   declare releasedYear: number | null;
+  /** The stock sheet: each field's value as the kit comes in the box. */
+  declare stockValues: CreationOptional<StoredSetupValues>;
+  /** For choice fields, the options that come in the box; other options are option parts. */
+  declare stockInBox: CreationOptional<Record<string, string[]>>;
+  declare templateVersion: CreationOptional<number>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
   declare maker?: NonAttribute<Maker>;
@@ -30,6 +36,9 @@ export class Kit extends Model<InferAttributes<Kit>, InferCreationAttributes<Kit
         name: { type: DataTypes.STRING(120), allowNull: false },
         vehicleClass: { type: DataTypes.STRING(40), allowNull: false },
         releasedYear: { type: DataTypes.INTEGER, allowNull: true },
+        stockValues: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+        stockInBox: { type: DataTypes.JSONB, allowNull: false, defaultValue: {} },
+        templateVersion: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

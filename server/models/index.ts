@@ -5,8 +5,11 @@ import { Track } from './Track';
 import { User } from './User';
 import { EmailToken } from './EmailToken';
 import { MailboxMessage } from './MailboxMessage';
+import { Car } from './Car';
+import { Setup } from './Setup';
+import { SetupRevision } from './SetupRevision';
 
-export { Maker, Kit, Track, User, EmailToken, MailboxMessage };
+export { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision };
 
 export type Models = {
   Maker: typeof Maker;
@@ -15,6 +18,9 @@ export type Models = {
   User: typeof User;
   EmailToken: typeof EmailToken;
   MailboxMessage: typeof MailboxMessage;
+  Car: typeof Car;
+  Setup: typeof Setup;
+  SetupRevision: typeof SetupRevision;
 };
 
 /** Registers every model on `sequelize` and wires the associations. */
@@ -25,9 +31,16 @@ export function initModels(sequelize: Sequelize): Models {
   User.initModel(sequelize);
   EmailToken.initModel(sequelize);
   MailboxMessage.initModel(sequelize);
+  Car.initModel(sequelize);
+  Setup.initModel(sequelize);
+  SetupRevision.initModel(sequelize);
 
   Maker.hasMany(Kit, { foreignKey: 'makerId', as: 'kits' });
   Kit.belongsTo(Maker, { foreignKey: 'makerId', as: 'maker' });
+  Car.belongsTo(Kit, { foreignKey: 'kitId', as: 'kit' });
+  Setup.belongsTo(Car, { foreignKey: 'carId', as: 'car' });
+  Setup.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
+  SetupRevision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
 
-  return { Maker, Kit, Track, User, EmailToken, MailboxMessage };
+  return { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision };
 }

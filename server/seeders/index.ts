@@ -1,5 +1,11 @@
 import type { Database } from '../db/database';
 import { hashPassword } from '../services/passwords';
+import { DEMO_CARS } from './demoSetups';
+import { buildStockSheet } from './stockSheets';
+import type { Transaction } from 'sequelize';
+import crypto from 'node:crypto';
+import { validateSetupValues, getTemplate } from '../../shared/types/templates';
+import type { StoredSetupValues } from '../../shared/types/setups';
 import { DEMO_KITS, DEMO_MAKERS, DEMO_RACERS, DEMO_TRACKS } from './demoWorld';
 
 /** True when nothing a person could have created is in the database yet. */
@@ -24,9 +30,19 @@ export async function seedDemoWorld(db: Database, options: { bcryptCost: number 
     for (const k of DEMO_KITS) {
       const makerId = makerIds.get(k.maker);
       if (makerId === undefined) throw new Error(`demo kit ${k.slug} names unknown maker ${k.maker}`);
+      const stock = buildStockSheet(k.slug, k.vehicleClass);
       await Kit.findOrCreate({
         where: { slug: k.slug },
-        defaults: { slug: k.slug, name: k.name, makerId, vehicleClass: k.vehicleClass, releasedYear: k.releasedYear },
+        defaults: {
+          slug: k.slug,
+          name: k.name,
+          makerId,
+          vehicleClass: k.vehicleClass,
+          releasedYear: k.releasedYear,
+          stockValues: stock.values,
+          stockInBox: stock.inBox,
+          templateVersion: stock.templateVersion,
+        },
         transaction,
       });
     }
@@ -40,5 +56,45 @@ export async function seedDemoWorld(db: Database, options: { bcryptCost: number 
         transaction,
       });
     }
+    await seedDemoGarages(db, transaction);
   });
+}
+
+/** Cars and setups of the demo racers, each revision one honest change; skipped for racers who have cars. */
+async function seedDemoGarages(db: Database, transaction: Transaction): Promise<void> {
+  const { User, Kit, Car, Setup, SetupRevision } = db.models;
+  for (const demo of DEMO_CARS) {
+    const owner = await User.findOne({ where: { handle: demo.owner }, transaction });
+    const kit = await Kit.findOne({ where: { slug: demo.kit }, transaction });
+    if (!owner || !kit) throw new Error(`demo car ${demo.nickname} names an unknown owner or kit`);
+    if ((await Car.count({ where: { ownerId: owner.id, nickname: demo.nickname }, transaction })) > 0) continue;
+    const car = await Car.create({ ownerId: owner.id, kitId: kit.id, nickname: demo.nickname, stock: demo.stock }, { transaction });
+    const template = getTemplate(kit.vehicleClass);
+    for (const s of demo.setups) {
+      const setup = await Setup.create(
+        {
+          ownerId: owner.id, carId: car.id, vehicleClass: kit.vehicleClass, templateVersion: template.version, title: s.title,
+          visibility: s.visibility, shareToken: crypto.randomBytes(18).toString('base64url'), trackType: s.trackType,
+          temperatureC: s.temperatureC, grip: s.grip, notesMd: s.notes,
+        },
+        { transaction },
+      );
+      let values: StoredSetupValues = { ...kit.stockValues };
+      const steps = [{ changes: {}, note: `Started from the ${kit.name} stock sheet.` }, ...s.steps];
+      let last = 0;
+      for (const [i, step] of steps.entries()) {
+        values = { ...values, ...step.changes };
+        const checked = validateSetupValues(template, values);
+        if (!checked.ok) throw new Error(`demo setup ${s.title} step ${i} is invalid: ${JSON.stringify(checked.errors)}`);
+        // Spread the history over the past weeks so it reads like a season of testing.
+        const createdAt = new Date(Date.now() - (steps.length - i) * 6 * 86_400_000);
+        const rev = await SetupRevision.create(
+          { setupId: setup.id, number: i + 1, values, changeNote: step.note, authorId: owner.id, createdAt },
+          { transaction },
+        );
+        last = rev.id;
+      }
+      await setup.update({ currentRevisionId: last, revisionCount: steps.length }, { transaction });
+    }
+  }
 }

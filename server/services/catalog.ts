@@ -1,4 +1,6 @@
 import type { KitSummary, TrackSummary } from '../../shared/types/catalog';
+import type { KitStock } from '../../shared/types/setups';
+import { ApiError } from '../errors';
 import type { Database } from '../db/database';
 
 /** Every kit with its maker's name, by maker then kit name. */
@@ -28,4 +30,11 @@ export async function listTracks(db: Database): Promise<TrackSummary[]> {
     indoor: t.indoor,
     notes: t.notes,
   }));
+}
+
+/** A kit's stock sheet and which choice options come in the box. */
+export async function getKitStock(db: Database, kitId: number): Promise<KitStock> {
+  const kit = Number.isSafeInteger(kitId) ? await db.models.Kit.findByPk(kitId) : null;
+  if (!kit) throw ApiError.notFound('That kit');
+  return { kitId: kit.id, vehicleClass: kit.vehicleClass, templateVersion: kit.templateVersion, values: kit.stockValues, inBox: kit.stockInBox };
 }

@@ -1,6 +1,7 @@
 import type { MigrationContext } from '../migrator';
 import * as demoWorld from './20261202T0000-catalog-and-racers';
 import * as accounts from './20261202T0100-accounts';
+import * as garage from './20261202T0200-garage-and-setups';
 
 export type Migration = {
   name: string;
@@ -12,4 +13,5 @@ export type Migration = {
 export const migrations: Migration[] = [
   { name: '20261202T0000-catalog-and-racers', ...demoWorld },
   { name: '20261202T0100-accounts', ...accounts },
+  { name: '20261202T0200-garage-and-setups', ...garage },
 ];

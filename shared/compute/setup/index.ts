@@ -32,3 +32,5 @@ export {
   type UnitPreferences,
 } from './display';
 export { PLAUSIBLE_RIDE_HEIGHT_MM, checkRideHeightPlausibility, type RangeMm } from './plausibility';
+export { computeSetupSummary, SUMMARY_KEYS, type SetupSummaryFigures, type SummaryFigure } from './summary';
+export { diffSetupValues, type FieldChange } from './diff';

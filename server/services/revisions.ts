@@ -1,0 +1,47 @@
+import type { RevisionCreate } from '../../shared/types/setups';
+import { revisionCreateSchema } from '../../shared/types/setups';
+import type { Database } from '../db/database';
+import { ApiError } from '../errors';
+import type { SetupRevision } from '../models/SetupRevision';
+import type { User } from '../models/User';
+import { findOwnSetup } from './setupAccess';
+import { validatedValues } from './setups';
+
+export type SavedRevision = { revision: SetupRevision; warnings: Record<string, string> };
+
+/**
+ * Saves the sheet as a new immutable revision. The setup row is locked for the transaction, so two
+ * saves from the same base cannot both win: the second gets 409 with the revision that is current.
+ */
+export async function saveRevision(db: Database, owner: User, setupId: number, input: RevisionCreate): Promise<SavedRevision> {
+  const data = revisionCreateSchema.parse(input);
+  const found = await findOwnSetup(db, owner.id, setupId);
+  const { values, warnings } = validatedValues(found.vehicleClass, data.values);
+  const revision = await db.sequelize.transaction(async (transaction) => {
+    const setup = await db.models.Setup.findByPk(found.id, { transaction, lock: transaction.LOCK.UPDATE });
+    if (!setup) throw ApiError.notFound('That setup');
+    if (setup.currentRevisionId !== data.baseRevisionId) {
+      const current = await db.models.SetupRevision.findByPk(setup.currentRevisionId!, {
+        transaction,
+        include: [{ model: db.models.User, as: 'author', attributes: ['handle'] }],
+      });
+      throw new ApiError(409, 'stale_revision', 'This setup changed since you opened it. Your values are kept; review the differences and save again.', {
+        currentRevision: {
+          id: current!.id,
+          number: current!.number,
+          values: current!.values,
+          changeNote: current!.changeNote,
+          authorHandle: current!.author?.handle ?? '',
+          createdAt: current!.createdAt.toISOString(),
+        },
+      });
+    }
+    const created = await db.models.SetupRevision.create(
+      { setupId: setup.id, number: setup.revisionCount + 1, values, changeNote: data.changeNote, authorId: owner.id },
+      { transaction },
+    );
+    await setup.update({ currentRevisionId: created.id, revisionCount: setup.revisionCount + 1 }, { transaction });
+    return created;
+  });
+  return { revision, warnings };
+}

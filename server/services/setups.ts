@@ -1,0 +1,120 @@
+import crypto from 'node:crypto';
+import type { SetupCreate, SetupDetail, SetupMetaUpdate, StoredSetupValues } from '../../shared/types/setups';
+import { setupCreateSchema, setupMetaUpdateSchema } from '../../shared/types/setups';
+import { getTemplate, validateSetupValues } from '../../shared/types/templates';
+import { diffSetupValues } from '../../shared/compute/setup/diff';
+import type { Database } from '../db/database';
+import { ApiError } from '../errors';
+import type { Setup } from '../models/Setup';
+import type { User } from '../models/User';
+import { findOwnCar } from './garage';
+import { renderMarkdown } from './markdown';
+import { listSetupPhotos } from './setupPhotos';
+import { canView, findOwnSetup, findViewableSetup, type Viewer } from './setupAccess';
+import { conditionsOf } from './setupDto';
+
+/** Validates values against the class template; 400 with a message per field when any is wrong. */
+export function validatedValues(vehicleClass: Setup['vehicleClass'], values: unknown): { values: StoredSetupValues; warnings: Record<string, string> } {
+  const result = validateSetupValues(getTemplate(vehicleClass), values);
+  if (!result.ok) throw ApiError.validation(result.errors, 'Some values on the sheet need fixing.');
+  return { values: result.values as StoredSetupValues, warnings: result.warnings };
+}
+
+function conditionColumns(c: SetupCreate['conditions']) {
+  return c ? { trackType: c.trackType ?? null, temperatureC: c.temperatureC ?? null, grip: c.grip ?? null } : {};
+}
+
+/** Creates a setup on one of my cars from the kit's stock sheet or a copy of my own setup; revision 1 in the same transaction. */
+export async function createSetup(db: Database, owner: User, input: SetupCreate): Promise<Setup> {
+  const data = setupCreateSchema.parse(input);
+  const car = await findOwnCar(db, owner.id, data.carId);
+  const kit = car.kit!;
+  let startValues: StoredSetupValues = kit.stockValues;
+  if (data.startFrom.kind === 'copy') {
+    const source = await findOwnSetup(db, owner.id, data.startFrom.setupId);
+    if (source.vehicleClass !== kit.vehicleClass) {
+      throw ApiError.validation({ startFrom: 'That setup is for another class of car; copy one for the same class.' });
+    }
+    startValues = (await db.models.SetupRevision.findByPk(source.currentRevisionId!))!.values;
+  }
+  const { values } = validatedValues(kit.vehicleClass, startValues);
+  return db.sequelize.transaction(async (transaction) => {
+    const setup = await db.models.Setup.create(
+      {
+        ownerId: owner.id,
+        carId: car.id,
+        vehicleClass: kit.vehicleClass,
+        templateVersion: getTemplate(kit.vehicleClass).version,
+        title: data.title,
+        visibility: data.visibility,
+        shareToken: crypto.randomBytes(18).toString('base64url'),
+        notesMd: data.notesMarkdown,
+        ...conditionColumns(data.conditions),
+      },
+      { transaction },
+    );
+    const note = data.startFrom.kind === 'stock' ? `Started from the ${kit.name} stock sheet.` : 'Started from a copy of one of my setups.';
+    const revision = await db.models.SetupRevision.create(
+      { setupId: setup.id, number: 1, values, changeNote: note, authorId: owner.id },
+      { transaction },
+    );
+    return setup.update({ currentRevisionId: revision.id, revisionCount: 1 }, { transaction });
+  });
+}
+
+/** Everything the setup page shows, for a viewer allowed to see it. */
+export async function getSetupDetail(db: Database, id: number, viewer: Viewer, shareToken?: string): Promise<SetupDetail> {
+  const setup = await findViewableSetup(db, id, viewer, shareToken);
+  const [car, owner, revisions] = await Promise.all([
+    db.models.Car.findByPk(setup.carId, { include: [{ model: db.models.Kit, as: 'kit', include: [{ model: db.models.Maker, as: 'maker' }] }] }),
+    db.models.User.findByPk(setup.ownerId),
+    db.models.SetupRevision.findAll({
+      where: { setupId: setup.id },
+      include: [{ model: db.models.User, as: 'author', attributes: ['handle'] }],
+      order: [['number', 'DESC']],
+    }),
+  ]);
+  const current = revisions.find((r) => r.id === setup.currentRevisionId)!;
+  const isOwner = viewer?.id === setup.ownerId;
+  return {
+    id: setup.id,
+    title: setup.title,
+    visibility: setup.visibility,
+    shareToken: isOwner && setup.visibility === 'unlisted' ? setup.shareToken : null,
+    owner: { handle: owner!.handle, displayName: owner!.displayName },
+    isOwner,
+    car: { id: car!.id, nickname: car!.nickname, kitName: car!.kit!.name, makerName: car!.kit!.maker?.name ?? '', stock: car!.stock },
+    vehicleClass: setup.vehicleClass,
+    templateVersion: setup.templateVersion,
+    conditions: conditionsOf(setup),
+    notesMarkdown: setup.notesMd,
+    notesHtml: renderMarkdown(setup.notesMd),
+    currentRevision: { id: current.id, number: current.number, values: current.values, changeNote: current.changeNote, createdAt: current.createdAt.toISOString() },
+    revisions: revisions.map((r, i) => ({
+      id: r.id,
+      number: r.number,
+      changeNote: r.changeNote,
+      authorHandle: r.author?.handle ?? '',
+      createdAt: r.createdAt.toISOString(),
+      changedFieldCount: revisions[i + 1] ? diffSetupValues(revisions[i + 1].values, r.values).length : 0,
+    })),
+    photos: await listSetupPhotos(db, setup.id),
+    createdAt: setup.createdAt.toISOString(),
+    updatedAt: setup.updatedAt.toISOString(),
+  };
+}
+
+/** Title, visibility, conditions and notes: the sheet's values change only through revisions. */
+export async function updateSetupMeta(db: Database, owner: User, id: number, input: SetupMetaUpdate): Promise<Setup> {
+  const setup = await findOwnSetup(db, owner.id, id);
+  const { conditions, notesMarkdown, ...rest } = setupMetaUpdateSchema.parse(input);
+  return setup.update({ ...rest, ...conditionColumns(conditions), ...(notesMarkdown !== undefined ? { notesMd: notesMarkdown } : {}) });
+}
+
+/** Deleting keeps the revisions (history is never removed) but hides the setup from everyone. */
+export async function deleteSetup(db: Database, owner: User, id: number): Promise<void> {
+  const setup = await findOwnSetup(db, owner.id, id);
+  await setup.update({ deletedAt: new Date() });
+}
+
+export { canView };
