@@ -42,9 +42,17 @@ DATABASE_URL="$TUNEFORK_E2E_DATABASE_URL" ./node_modules/.bin/tsx server/db/cli.
   || die "seeding the e2e database failed"
 if web_export_stale; then build_web; fi
 
+TYPECHECK=0
+if [ -z "${TUNEFORK_SKIP_TYPECHECK:-}" ]; then
+  log "type-checking the client and server projects…"
+  ./node_modules/.bin/tsc --noEmit -p tsconfig.json && ./node_modules/.bin/tsc --noEmit -p tsconfig.server.json || TYPECHECK=1
+  [ "$TYPECHECK" = 0 ] || log "type errors above: the run will fail"
+fi
+
 START=$(date +%s)
 ./node_modules/.bin/jest --ci --runInBand --json --outputFile="$TMP/results.json" "$@"
 STATUS=$?
 log "jest took $(( $(date +%s) - START )) s"
 node scripts/summarize-tests.js "$TMP/results.json" || STATUS=1
+[ "$TYPECHECK" = 0 ] || { log "type-check failed"; STATUS=1; }
 exit $STATUS

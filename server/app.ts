@@ -20,14 +20,17 @@ import { devRouter } from './routes/dev';
 import { garageRouter } from './routes/garage';
 import { healthRouter } from './routes/health';
 import { meRouter } from './routes/me';
+import { photosRouter } from './routes/photos';
 import { racersRouter } from './routes/racers';
 import { setupsRouter } from './routes/setups';
 import type { Mailer } from './services/mail';
+import { createStorage, type BlobStorage } from './storage';
 import { webAppRouter } from './webApp';
 
-export type AppDeps = { config: Config; db: Database; logger: Logger; mailer: Mailer };
+/** `storage` defaults to the configured driver; tests pass their own. */
+export type AppDeps = { config: Config; db: Database; logger: Logger; mailer: Mailer; storage?: BlobStorage };
 /** What routers get: the app's dependencies plus its route table and passport instance. */
-export type RouterDeps = AppDeps & { routes: RouteTable; passport: TunePassport };
+export type RouterDeps = AppDeps & { routes: RouteTable; passport: TunePassport; storage: BlobStorage };
 
 /**
  * The Content-Security-Policy the exported web app runs under. React Native Web writes its
@@ -52,6 +55,8 @@ function apiRouter(deps: RouterDeps): Router {
   const api = Router();
   if (deps.config.devWebOrigin) api.use(cors({ origin: deps.config.devWebOrigin, credentials: true }));
   api.use(jsonRateLimit(deps.config.apiRateLimit));
+  // Before JSON and sessions: photos need neither, and a cacheable image must never carry Set-Cookie.
+  api.use('/photos', photosRouter(deps));
   api.use(express.json({ limit: deps.config.jsonBodyLimit }));
   api.use(sessionMiddleware(deps.config, deps.db));
   api.use(deps.passport.initialize());
@@ -73,7 +78,8 @@ function apiRouter(deps: RouterDeps): Router {
 /** Builds the Express app: middleware, /api, the web app, the error handler. Never listens. */
 export function createApp(deps: AppDeps): Express {
   const routes = new RouteTable();
-  const routerDeps: RouterDeps = { ...deps, routes, passport: createPassport(deps) };
+  const storage = deps.storage ?? createStorage(deps.config.storage);
+  const routerDeps: RouterDeps = { ...deps, storage, routes, passport: createPassport(deps) };
   const app = express();
   app.disable('x-powered-by');
   // Behind one reverse proxy, trust exactly one hop of X-Forwarded-For (not any client's claim).

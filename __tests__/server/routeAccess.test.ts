@@ -48,6 +48,9 @@ const EXPECTED: Record<string, Access> = {
   'POST /api/setups/:id/revisions': 'signedIn',
   'GET /api/setups/:id/export.json': 'public',
   'GET /api/setups/:id/export.csv': 'public',
+  'POST /api/setups/:id/photos': 'signedIn',
+  'DELETE /api/setups/:id/photos/:photoId': 'signedIn',
+  'GET /api/photos/:key': 'public',
 };
 
 type Layer = { route?: { methods: Record<string, boolean> }; handle?: { stack?: Layer[] } };

@@ -1,3 +1,6 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
 import { Writable } from 'node:stream';
 import pino from 'pino';
 import type { Express } from 'express';
@@ -14,6 +17,8 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
     ...loadConfig({ ...process.env, NODE_ENV: 'test' }),
     authRateLimit: { max: 100_000, windowMs: 60_000 },
     apiRateLimit: { max: 100_000, windowMs: 60_000 },
+    // Photos go to a throwaway folder, never into the repository's .data.
+    storage: { driver: 'local', directory: fs.mkdtempSync(path.join(os.tmpdir(), 'tunefork-photos-')) },
     ...overrides,
   };
 }
@@ -55,6 +60,9 @@ export function buildTestApp(overrides: Partial<Config> = {}): TestApp {
     async close() {
       await mailer.close();
       await db.close();
+      if (config.storage.driver === 'local' && config.storage.directory.startsWith(path.join(os.tmpdir(), 'tunefork-photos-'))) {
+        fs.rmSync(config.storage.directory, { recursive: true, force: true });
+      }
     },
   };
 }

@@ -8,8 +8,9 @@ import { MailboxMessage } from './MailboxMessage';
 import { Car } from './Car';
 import { Setup } from './Setup';
 import { SetupRevision } from './SetupRevision';
+import { Photo } from './Photo';
 
-export { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision };
+export { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision, Photo };
 
 export type Models = {
   Maker: typeof Maker;
@@ -21,6 +22,7 @@ export type Models = {
   Car: typeof Car;
   Setup: typeof Setup;
   SetupRevision: typeof SetupRevision;
+  Photo: typeof Photo;
 };
 
 /** Registers every model on `sequelize` and wires the associations. */
@@ -34,6 +36,7 @@ export function initModels(sequelize: Sequelize): Models {
   Car.initModel(sequelize);
   Setup.initModel(sequelize);
   SetupRevision.initModel(sequelize);
+  Photo.initModel(sequelize);
 
   Maker.hasMany(Kit, { foreignKey: 'makerId', as: 'kits' });
   Kit.belongsTo(Maker, { foreignKey: 'makerId', as: 'maker' });
@@ -42,5 +45,5 @@ export function initModels(sequelize: Sequelize): Models {
   Setup.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
   SetupRevision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
 
-  return { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision };
+  return { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision, Photo };
 }

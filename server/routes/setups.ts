@@ -2,7 +2,9 @@ import { Router, type Request } from 'express';
 import { setupImportSchema } from '../../shared/types/setups';
 import type { RouterDeps } from '../app';
 import { declareRoutes } from '../middleware/access';
+import { photoUploadMiddleware, requireUploadedPhoto } from '../services/photos';
 import { saveRevision } from '../services/revisions';
+import { addSetupPhoto, removeSetupPhoto } from '../services/setupPhotos';
 import { findViewableSetup } from '../services/setupAccess';
 import { exportSetupCsv, exportSetupDocument, importSetupDocument } from '../services/setupDocuments';
 import { createSetup, deleteSetup, getSetupDetail, updateSetupMeta } from '../services/setups';
@@ -47,6 +49,17 @@ export function setupsRouter(deps: RouterDeps): Router {
   r.post('/:id/revisions', 'signedIn', async (req, res) => {
     const { revision, warnings } = await saveRevision(db, req.user!, Number(req.params.id), req.body);
     res.status(201).json({ setup: await getSetupDetail(db, revision.setupId, req.user), warnings });
+  });
+
+  r.post('/:id/photos', 'signedIn', photoUploadMiddleware(deps.config), async (req, res) => {
+    const caption = typeof req.body?.caption === 'string' ? req.body.caption : undefined;
+    await addSetupPhoto(deps, req.user!, Number(req.params.id), requireUploadedPhoto(req), caption);
+    res.status(201).json({ setup: await getSetupDetail(db, Number(req.params.id), req.user) });
+  });
+
+  r.delete('/:id/photos/:photoId', 'signedIn', async (req, res) => {
+    await removeSetupPhoto(deps, req.user!, Number(req.params.id), Number(req.params.photoId));
+    res.json({ setup: await getSetupDetail(db, Number(req.params.id), req.user) });
   });
 
   r.get('/:id/export.json', 'public', async (req, res) => {
