@@ -1,37 +1,46 @@
-import { Pressable, StyleSheet } from 'react-native';
+import { ActivityIndicator, Pressable, StyleSheet } from 'react-native';
 import { layout, radius, space, useTheme } from '../theme';
 import { AppText } from './AppText';
 
 export type ButtonProps = {
   label: string;
   onPress: () => void;
-  variant?: 'primary' | 'secondary';
+  /** Danger is for actions that end sessions or take something away. */
+  variant?: 'primary' | 'secondary' | 'danger';
   disabled?: boolean;
+  /** While a request is out: shows a spinner and `busyLabel`, and ignores presses. */
+  busy?: boolean;
+  busyLabel?: string;
   /** Spoken instead of the label when the label alone is ambiguous. */
   accessibilityLabel?: string;
 };
 
-export function Button({ label, onPress, variant = 'primary', disabled, accessibilityLabel }: ButtonProps) {
+export function Button({ label, onPress, variant = 'primary', disabled, busy, busyLabel, accessibilityLabel }: ButtonProps) {
   const { colors } = useTheme();
-  const primary = variant === 'primary';
+  const filled = variant === 'primary';
+  const tint = variant === 'danger' ? colors.danger : colors.accent;
+  const inactive = disabled || busy;
+  const shown = busy && busyLabel ? busyLabel : label;
   return (
     <Pressable
       role="button"
-      aria-label={accessibilityLabel ?? label}
-      aria-disabled={disabled}
-      disabled={disabled}
+      aria-label={busy && busyLabel ? busyLabel : (accessibilityLabel ?? label)}
+      aria-disabled={inactive}
+      aria-busy={busy}
+      disabled={inactive}
       onPress={onPress}
       style={({ pressed }) => [
         styles.button,
         {
-          backgroundColor: primary ? colors.accent : colors.surface,
-          borderColor: colors.accent,
+          backgroundColor: filled ? tint : colors.surface,
+          borderColor: tint,
           opacity: disabled ? 0.5 : pressed ? 0.85 : 1,
         },
       ]}
     >
-      <AppText variant="body" style={[styles.label, { color: primary ? colors.accentText : colors.accent }]}>
-        {label}
+      {busy ? <ActivityIndicator size="small" color={filled ? colors.accentText : tint} /> : null}
+      <AppText variant="body" style={[styles.label, { color: filled ? colors.accentText : tint }]}>
+        {shown}
       </AppText>
     </Pressable>
   );
@@ -44,6 +53,8 @@ const styles = StyleSheet.create({
     paddingHorizontal: space.lg,
     borderRadius: radius.pill,
     borderWidth: 1,
+    flexDirection: 'row',
+    gap: space.sm,
     alignItems: 'center',
     justifyContent: 'center',
     alignSelf: 'flex-start',

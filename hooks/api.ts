@@ -1,4 +1,5 @@
 import type { z } from '../shared/types/zod';
+import { csrfResponseSchema } from '../shared/types/auth';
 import { apiErrorBodySchema } from '../shared/types/errors';
 
 /** A failed API call, carrying the server's stable code and field-level details. */
@@ -17,12 +18,49 @@ export class ApiRequestError extends Error {
 /** Same-origin on web (the server serves the app); EXPO_PUBLIC_API_URL points elsewhere in dev. */
 export const API_BASE = (process.env.EXPO_PUBLIC_API_URL ?? '').replace(/\/$/, '');
 
+/** The absolute address of an API path, for the few flows that navigate instead of fetching. */
+export function apiUrl(path: string): string {
+  return `${API_BASE}/api${path}`;
+}
+
+type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+
 type RequestOptions<T> = {
-  method?: 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
+  method?: Method;
   body?: unknown;
   schema: z.ZodType<T>;
   signal?: AbortSignal;
 };
+
+export const CSRF_HEADER = 'X-CSRF-Token';
+const CSRF_INVALID = 'csrf_invalid';
+
+// Kept in memory only: the token is tied to the session cookie, so a reload simply fetches a new one.
+let csrfToken: string | null = null;
+let csrfInFlight: Promise<string> | null = null;
+
+/**
+ * Replaces the cached CSRF token. Sign-in and sign-up hand back a fresh one (the session is
+ * regenerated); sign-out passes null so the next write asks for a token of the new session.
+ */
+export function rememberCsrfToken(token: string | null): void {
+  csrfToken = token;
+}
+
+async function currentCsrfToken(): Promise<string> {
+  if (csrfToken) return csrfToken;
+  // Writes started together share one token request instead of racing for separate tokens.
+  csrfInFlight ??= send('/auth/csrf', 'GET', undefined, undefined, null)
+    .then((payload) => {
+      // A token remembered from a sign-in meanwhile belongs to the newer session: keep it.
+      csrfToken ??= csrfResponseSchema.parse(payload).csrfToken;
+      return csrfToken;
+    })
+    .finally(() => {
+      csrfInFlight = null;
+    });
+  return csrfInFlight;
+}
 
 async function readError(response: Response): Promise<ApiRequestError> {
   let payload: unknown = null;
@@ -39,21 +77,57 @@ async function readError(response: Response): Promise<ApiRequestError> {
   return new ApiRequestError(response.status, 'http_error', `The server answered ${response.status}.`);
 }
 
-/** The one way the client talks to the API: JSON in and out, cookies included, typed errors. */
-export async function apiRequest<T>(path: string, options: RequestOptions<T>): Promise<T> {
+/** One HTTP exchange: JSON in and out, cookies included; resolves the parsed body (undefined for 204). */
+async function send(path: string, method: Method, body: unknown, signal: AbortSignal | undefined, csrf: string | null): Promise<unknown> {
+  const headers: Record<string, string> = { Accept: 'application/json' };
+  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  if (csrf) headers[CSRF_HEADER] = csrf;
   let response: Response;
   try {
-    response = await fetch(`${API_BASE}/api${path}`, {
-      method: options.method ?? 'GET',
+    response = await fetch(apiUrl(path), {
+      method,
       credentials: 'include',
-      headers: options.body === undefined ? { Accept: 'application/json' } : { Accept: 'application/json', 'Content-Type': 'application/json' },
-      body: options.body === undefined ? undefined : JSON.stringify(options.body),
-      signal: options.signal,
+      headers,
+      body: body === undefined ? undefined : JSON.stringify(body),
+      signal,
     });
   } catch (err) {
     if (err instanceof Error && err.name === 'AbortError') throw err;
     throw new ApiRequestError(0, 'network_error', 'Tunefork cannot reach its server. Check your connection and try again.');
   }
   if (!response.ok) throw await readError(response);
-  return options.schema.parse(await response.json());
+  if (response.status === 204) return undefined;
+  return response.json();
+}
+
+async function sendWithCsrf(path: string, method: Method, body: unknown, signal?: AbortSignal): Promise<unknown> {
+  try {
+    return await send(path, method, body, signal, await currentCsrfToken());
+  } catch (err) {
+    // The session may have rotated under us (expired, signed in elsewhere): one fresh token, one retry.
+    if (!(err instanceof ApiRequestError && err.status === 403 && err.code === CSRF_INVALID)) throw err;
+    rememberCsrfToken(null);
+    return send(path, method, body, signal, await currentCsrfToken());
+  }
+}
+
+/** The one way the client talks to the API: reads go straight out, writes carry the CSRF token. */
+export async function apiRequest<T>(path: string, options: RequestOptions<T>): Promise<T> {
+  const method = options.method ?? 'GET';
+  const payload =
+    method === 'GET'
+      ? await send(path, method, undefined, options.signal, null)
+      : await sendWithCsrf(path, method, options.body, options.signal);
+  return options.schema.parse(payload);
+}
+
+type MutateOptions = { method?: Exclude<Method, 'GET'>; body?: unknown; signal?: AbortSignal };
+
+/** A JSON write (POST by default) whose answer is checked against `schema`. */
+export function apiMutate<T>(path: string, options: MutateOptions & { schema: z.ZodType<T> }): Promise<T>;
+/** A JSON write whose answer carries nothing the client needs (204, or a body it ignores). */
+export function apiMutate(path: string, options?: MutateOptions): Promise<void>;
+export async function apiMutate<T>(path: string, options: MutateOptions & { schema?: z.ZodType<T> } = {}): Promise<T | void> {
+  const payload = await sendWithCsrf(path, options.method ?? 'POST', options.body, options.signal);
+  return options.schema ? options.schema.parse(payload) : undefined;
 }

@@ -5,6 +5,18 @@ import { ApiRequestError } from './api';
 export const STALE = {
   status: 15_000,
   catalog: 10 * 60_000,
+  /** Who is signed in: every mutation that changes it writes the answer straight into the cache. */
+  session: 5 * 60_000,
+  /** Public racer pages change when their owner edits a profile, which is rare. */
+  racer: 60_000,
+  /** Admin lists should reflect other admins' actions without a reload. */
+  adminUsers: 10_000,
+  /** My garage changes only through my own mutations, which update it. */
+  garage: 60_000,
+  /** A setup page: revisions by its owner arrive through mutations; others' views refresh on focus. */
+  setup: 30_000,
+  /** The dev mailbox exists to show the mail that was just sent. */
+  mailbox: 0,
 } as const;
 
 export function createQueryClient(): QueryClient {

@@ -14,7 +14,9 @@ export type Palette = {
   accentText: string;
   accentSoft: string;
   success: string;
+  successSoft: string;
   danger: string;
+  dangerSoft: string;
   caution: string;
   cautionSoft: string;
   focus: string;
@@ -32,7 +34,9 @@ export const palettes: { light: Palette; dark: Palette } = {
     accentText: '#FFFFFF',
     accentSoft: '#D7EEEC',
     success: '#1E6B3A',
+    successSoft: '#DDF1E3',
     danger: '#A3241B',
+    dangerSoft: '#FBE4E1',
     caution: '#7A4F00',
     cautionSoft: '#FBEFD5',
     focus: '#2C5FD6',
@@ -48,7 +52,9 @@ export const palettes: { light: Palette; dark: Palette } = {
     accentText: '#0C1B1A',
     accentSoft: '#17393A',
     success: '#7BD69A',
+    successSoft: '#173222',
     danger: '#FF8A80',
+    dangerSoft: '#3D1A18',
     caution: '#F2C063',
     cautionSoft: '#3A2E14',
     focus: '#8AB0FF',
@@ -80,4 +86,6 @@ export const layout = {
   railWidth: 208,
   tabBarHeight: 60,
   minTouchTarget: 44,
+  avatarSmall: 44,
+  avatarLarge: 72,
 } as const;

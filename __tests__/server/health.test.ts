@@ -38,7 +38,7 @@ describe('GET /api/health', () => {
     expect(res.status).toBe(200);
     expect(res.headers['cache-control']).toBe('no-store');
     const body = healthSchema.parse(res.body);
-    expect(body).toMatchObject({ status: 'ok', database: 'ok' });
+    expect(body).toMatchObject({ status: 'ok', database: 'ok', devTools: true });
   });
 
   it('answers 503 with a clear body while the database is stopped, and ok again once it is back', async () => {

@@ -7,7 +7,7 @@ export function healthRouter(deps: RouterDeps): Router {
   const router = Router();
   const r = declareRoutes(router, deps.routes, '/health');
   r.get('/', 'public', async (_req, res) => {
-    res.set('Cache-Control', 'no-store').json(await checkHealth(deps.db, deps.config.version));
+    res.set('Cache-Control', 'no-store').json(await checkHealth(deps.db, deps.config.version, deps.config.nodeEnv !== 'production'));
   });
   return router;
 }
