@@ -131,3 +131,41 @@ export async function apiMutate<T>(path: string, options: MutateOptions & { sche
   const payload = await sendWithCsrf(path, options.method ?? 'POST', options.body, options.signal);
   return options.schema ? options.schema.parse(payload) : undefined;
 }
+
+/**
+ * Uploads a multipart form with progress (fetch cannot report upload progress, XMLHttpRequest can).
+ * Carries the CSRF token like every write and retries once on `csrf_invalid`.
+ */
+export async function apiUpload<T>(
+  path: string,
+  form: FormData,
+  options: { schema: z.ZodType<T>; onProgress?: (fraction: number) => void; signal?: AbortSignal },
+): Promise<T> {
+  const attempt = (token: string) =>
+    new Promise<unknown>((resolve, reject) => {
+      const xhr = new XMLHttpRequest();
+      xhr.open('POST', apiUrl(path));
+      xhr.withCredentials = true;
+      xhr.setRequestHeader(CSRF_HEADER, token);
+      xhr.setRequestHeader('Accept', 'application/json');
+      xhr.upload.onprogress = (e) => {
+        if (e.lengthComputable) options.onProgress?.(e.loaded / e.total);
+      };
+      xhr.onerror = () => reject(new ApiRequestError(0, 'network_error', 'The upload could not reach the server. Check your connection and try again.'));
+      xhr.onabort = () => reject(new DOMException('The upload was cancelled.', 'AbortError'));
+      xhr.onload = () => {
+        const response = new Response(xhr.responseText || null, { status: xhr.status, headers: { 'Content-Type': 'application/json' } });
+        if (xhr.status >= 200 && xhr.status < 300) resolve(xhr.responseText ? JSON.parse(xhr.responseText) : undefined);
+        else void readError(response).then(reject);
+      };
+      options.signal?.addEventListener('abort', () => xhr.abort());
+      xhr.send(form);
+    });
+  try {
+    return options.schema.parse(await attempt(await currentCsrfToken()));
+  } catch (err) {
+    if (!(err instanceof ApiRequestError && err.status === 403 && err.code === CSRF_INVALID)) throw err;
+    rememberCsrfToken(null);
+    return options.schema.parse(await attempt(await currentCsrfToken()));
+  }
+}

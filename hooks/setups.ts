@@ -11,7 +11,7 @@ import {
   type SetupMetaUpdate,
 } from '../shared/types/setups';
 import { z } from '../shared/types/zod';
-import { apiMutate, apiRequest } from './api';
+import { apiMutate, apiRequest, apiUpload } from './api';
 import { STALE } from './queryClient';
 
 export const setupKeys = {
@@ -121,6 +121,20 @@ export function useDeleteSetupPhoto(id: number) {
   return useMutation({
     mutationFn: async (photoId: number) =>
       (await apiMutate(`/setups/${id}/photos/${photoId}`, { method: 'DELETE', schema: setupDetailResponseSchema })).setup,
+    onSuccess: write,
+  });
+}
+
+/** Uploads a photo to a setup, reporting progress from 0 to 1; the answer replaces the cached setup. */
+export function useUploadSetupPhoto(id: number) {
+  const write = useSetupCacheWriter();
+  return useMutation({
+    mutationFn: ({ file, caption, onProgress }: { file: Blob; caption?: string; onProgress?: (fraction: number) => void }) => {
+      const form = new FormData();
+      if (caption) form.append('caption', caption);
+      form.append('photo', file);
+      return apiUpload(`/setups/${id}/photos`, form, { schema: setupDetailResponseSchema, onProgress }).then((r) => r.setup);
+    },
     onSuccess: write,
   });
 }
