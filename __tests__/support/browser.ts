@@ -33,7 +33,10 @@ export async function openWatchedPage(browser: Browser, viewport: { width: numbe
   const page = await context.newPage();
   const consoleErrors: string[] = [];
   page.on('console', (msg) => {
-    if (msg.type() === 'error') consoleErrors.push(msg.text());
+    // A 4xx answer the app handles (a wrong password, say) still makes Chromium log the request.
+    if (msg.type() === 'error' && !/Failed to load resource: the server responded with a status of 4\d\d/.test(msg.text())) {
+      consoleErrors.push(msg.text());
+    }
   });
   page.on('pageerror', (err) => consoleErrors.push(`pageerror: ${err.message}`));
   return {

@@ -1,5 +1,7 @@
 import { spawn, type ChildProcess } from 'node:child_process';
+import fs from 'node:fs';
 import net from 'node:net';
+import os from 'node:os';
 import path from 'node:path';
 
 const ROOT = path.resolve(__dirname, '../..');
@@ -27,7 +29,17 @@ export async function startServer(env: Record<string, string> = {}): Promise<Run
   if (!databaseUrl) throw new Error('run through npm test: no database URL for the e2e server');
   const child = spawn(path.join(ROOT, 'node_modules/.bin/tsx'), ['server/index.ts'], {
     cwd: ROOT,
-    env: { ...process.env, NODE_ENV: 'test', LOG_LEVEL: 'warn', DATABASE_URL: databaseUrl, PORT: String(port), HOST: '127.0.0.1', ...env },
+    env: {
+      ...process.env,
+      NODE_ENV: 'test',
+      LOG_LEVEL: 'warn',
+      DATABASE_URL: databaseUrl,
+      PORT: String(port),
+      HOST: '127.0.0.1',
+      // Uploaded photos of a browser run go to a throwaway folder.
+      DATA_DIR: fs.mkdtempSync(path.join(os.tmpdir(), 'tunefork-e2e-data-')),
+      ...env,
+    },
     stdio: ['ignore', 'pipe', 'pipe'],
   });
   const output: string[] = [];
