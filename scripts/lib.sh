@@ -118,3 +118,20 @@ build_web() {
   (cd "$ROOT" && ./node_modules/.bin/expo export --platform web --output-dir dist >"$ROOT/.data/web-build.log" 2>&1) \
     || { tail -40 "$ROOT/.data/web-build.log" >&2; die "web build failed; full log in .data/web-build.log"; }
 }
+
+# Unless DATABASE_URL is set: start the embedded cluster in .data/postgres on TUNEFORK_PG_PORT
+# (54329 by default), create the database and export DATABASE_URL. Sets PG_DIR and OWN_DB (1 when
+# this script started the cluster and so must stop it).
+use_embedded_postgres_unless_url() {
+  PG_DIR="$ROOT/.data/postgres"
+  OWN_DB=0
+  [ -n "${DATABASE_URL:-}" ] && return 0
+  local port="${TUNEFORK_PG_PORT:-54329}"
+  ensure_postgres
+  pg_init "$PG_DIR"
+  pg_start "$PG_DIR" "$port"
+  pg_create_db "$port" tunefork
+  export DATABASE_URL="postgres://tunefork@127.0.0.1:$port/tunefork"
+  OWN_DB=1
+  log "PostgreSQL is up on 127.0.0.1:$port (data in .data/postgres)"
+}

@@ -8,18 +8,7 @@ mkdir -p .data
 
 ensure_node_modules
 
-PG_DIR="$ROOT/.data/postgres"
-PG_PORT="${TUNEFORK_PG_PORT:-54329}"
-OWN_DB=0
-if [ -z "${DATABASE_URL:-}" ]; then
-  ensure_postgres
-  pg_init "$PG_DIR"
-  pg_start "$PG_DIR" "$PG_PORT"
-  pg_create_db "$PG_PORT" tunefork
-  export DATABASE_URL="postgres://tunefork@127.0.0.1:$PG_PORT/tunefork"
-  OWN_DB=1
-  log "PostgreSQL is up on 127.0.0.1:$PG_PORT (data in .data/postgres)"
-fi
+use_embedded_postgres_unless_url
 
 cleanup() {
   if [ "$OWN_DB" = 1 ]; then
