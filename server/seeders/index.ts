@@ -82,6 +82,7 @@ async function seedDemoGarages(db: Database, transaction: Transaction): Promise<
       let values: StoredSetupValues = { ...kit.stockValues };
       const steps = [{ changes: {}, note: `Started from the ${kit.name} stock sheet.` }, ...s.steps];
       let last = 0;
+      let lastAt = new Date();
       for (const [i, step] of steps.entries()) {
         values = { ...values, ...step.changes };
         const checked = validateSetupValues(template, values);
@@ -93,8 +94,14 @@ async function seedDemoGarages(db: Database, transaction: Transaction): Promise<
           { transaction },
         );
         last = rev.id;
+        lastAt = createdAt;
       }
       await setup.update({ currentRevisionId: last, revisionCount: steps.length }, { transaction });
+      // The setup's own dates follow its history, so lists and pages agree on when it last changed.
+      await db.sequelize.query('UPDATE setups SET created_at = :created, updated_at = :updated WHERE id = :id', {
+        replacements: { created: new Date(lastAt.getTime() - (steps.length - 1) * 6 * 86_400_000), updated: lastAt, id: setup.id },
+        transaction,
+      });
     }
   }
 }

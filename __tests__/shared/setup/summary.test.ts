@@ -39,9 +39,14 @@ describe('setup summary figures', () => {
     expect(s.totalRearToeDeg.value).toBeCloseTo(1.75, 12);
   });
 
+  it('asks for the clutch bell on nitro sheets and the pinion on electric ones', () => {
+    expect(computeSetupSummary('buggy-1-8-nitro', { 'gear.spur': 46 }).gearRatio.missing).toEqual(['gear.clutch-bell']);
+    expect(computeSetupSummary('truggy-1-8-electric', { 'gear.spur': 46 }).gearRatio.missing).toEqual(['gear.pinion']);
+  });
+
   it('names what is missing instead of guessing', () => {
     const s = computeSetupSummary('buggy-1-10-2wd', { 'gear.spur': 84 });
-    expect(s.gearRatio).toEqual({ value: null, missing: ['gear.clutch-bell'] });
+    expect(s.gearRatio).toEqual({ value: null, missing: ['gear.pinion'] });
     expect(s.finalDriveRatio.value).toBeNull();
     expect(s.rolloutMm.missing).toContain('tire.rear.diameter');
   });

@@ -52,9 +52,10 @@ function figure(inputs: Record<string, number | undefined>, compute: (n: Record<
  * The computed figures a setup page shows, from stored values. A figure whose inputs are not on
  * the sheet comes back empty with the missing field keys, so the page can say what to fill in.
  */
-export function computeSetupSummary(_vehicleClass: VehicleClassKey, values: Values): SetupSummaryFigures {
+export function computeSetupSummary(vehicleClass: VehicleClassKey, values: Values): SetupSummaryFigures {
   const k = SUMMARY_KEYS;
-  const pinionKey = k.pinion.find((key) => num(values, key) !== undefined) ?? k.pinion[0];
+  // Nitro cars drive the spur through a clutch bell, electric ones through a motor pinion.
+  const pinionKey = vehicleClass.endsWith('-nitro') ? k.pinion[0] : k.pinion[1];
   const spur = num(values, k.spur);
   const pinion = num(values, pinionKey);
   const ring = num(values, k.ring);

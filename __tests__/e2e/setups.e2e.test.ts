@@ -1,0 +1,79 @@
+import type { Browser } from 'playwright-core';
+import { jpegWithGps } from '../support/images';
+import { launchBrowser, openWatchedPage, seriousAccessibilityViolations, VIEWPORTS } from '../support/browser';
+import { startServer, type RunningServer } from '../support/server';
+
+jest.setTimeout(240_000);
+
+let server: RunningServer;
+let browser: Browser;
+
+beforeAll(async () => {
+  server = await startServer();
+  browser = await launchBrowser();
+});
+afterAll(async () => {
+  await browser?.close();
+  await server?.stop();
+});
+
+it('a racer adds a car, starts a setup from the stock sheet, changes two fields with a note, adds a photo and prints (phone)', async () => {
+  const w = await openWatchedPage(browser, VIEWPORTS.phone);
+  const { page } = w;
+  // The demo newcomer, signed in through the API so the browser shares the session cookie.
+  const { csrfToken } = await (await page.request.get(`${server.baseUrl}/api/auth/csrf`)).json();
+  const signIn = await page.request.post(`${server.baseUrl}/api/auth/sign-in`, {
+    data: { login: 'rafi_new', password: 'first-season-stoat-8e' },
+    headers: { 'X-CSRF-Token': csrfToken },
+  });
+  expect(signIn.ok()).toBe(true);
+
+  await page.goto(`${server.baseUrl}/garage`);
+  await page.getByRole('link', { name: 'Add a car' }).first().click();
+  await page.waitForURL((url) => url.pathname === '/garage/add-car');
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
+  await page.getByText('Ottervale Kitworks Stoat 8N').first().click();
+  await page.getByLabel('Name for the car').fill('Browser Stoat');
+  await page.getByRole('button', { name: 'Add the car' }).click();
+  await page.waitForURL((url) => url.pathname === '/garage');
+  const car = page.getByRole('article', { name: 'Browser Stoat' });
+  await car.getByRole('link', { name: 'New setup' }).click();
+  await page.waitForURL((url) => url.pathname === '/setups/new');
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
+  await page.getByLabel('Title', { exact: true }).fill('First club night');
+  await page.getByRole('button', { name: 'Create the setup' }).click();
+  await page.waitForURL((url) => /^\/setups\/\d+$/.test(url.pathname));
+  const setupPath = new URL(page.url()).pathname;
+  await page.getByRole('heading', { name: 'First club night', level: 1 }).waitFor();
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
+
+  await page.getByRole('link', { name: 'Edit the sheet' }).click();
+  await page.waitForURL((url) => url.pathname === `${setupPath}/edit`);
+  await page.getByRole('button', { name: /Increase rear shock oil/i }).click();
+  await page.getByRole('button', { name: /Increase spur gear/i }).click();
+  await page.getByText(/2 fields changed/i).first().waitFor();
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
+  await page.getByLabel(/Change note/).fill('Thicker rear oil and one more spur tooth for the long straight.');
+  await page.getByRole('button', { name: 'Save revision 2' }).click();
+  await page.waitForURL((url) => url.pathname === setupPath);
+  await page.getByText('Thicker rear oil and one more spur tooth for the long straight.').first().waitFor();
+
+  // Slow the upload down so the progress bar has time to be seen.
+  const cdp = await w.context.newCDPSession(page);
+  await cdp.send('Network.enable');
+  await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 20, downloadThroughput: -1, uploadThroughput: 60 * 1024 });
+  const photo = await jpegWithGps({ width: 1800, height: 1200 });
+  await page.locator('input[type=file]').setInputFiles({ name: 'rear.jpg', mimeType: 'image/jpeg', buffer: photo });
+  await page.getByRole('progressbar', { name: 'Photo upload' }).waitFor();
+  await page.getByRole('button', { name: /Open photo 1/ }).waitFor({ timeout: 60_000 });
+  await cdp.send('Network.emulateNetworkConditions', { offline: false, latency: 0, downloadThroughput: -1, uploadThroughput: -1 });
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
+
+  await page.getByRole('link', { name: 'Pit sheet to print' }).click();
+  await page.waitForURL((url) => url.pathname === `${setupPath}/print`);
+  await page.getByText(/Revision 2/).first().waitFor();
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
+  expect(w.consoleErrors).toEqual([]);
+  expect(await w.cspViolations()).toEqual([]);
+  await w.context.close();
+});

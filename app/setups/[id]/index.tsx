@@ -1,0 +1,151 @@
+import { router, useLocalSearchParams } from 'expo-router';
+import { useState } from 'react';
+import { EditorSavedNotice } from '../../../components/EditorSavedNotice';
+import { PhotoGallery } from '../../../components/PhotoGallery';
+import { PhotoUploader } from '../../../components/PhotoUploader';
+import { PhotoViewer } from '../../../components/PhotoViewer';
+import { RevisionList } from '../../../components/RevisionList';
+import { SafetyNote } from '../../../components/SafetyNote';
+import { SetupActions } from '../../../components/SetupActions';
+import { SetupNotes } from '../../../components/SetupNotes';
+import { SetupOverview } from '../../../components/SetupOverview';
+import { SetupColumns, SetupPageFrame } from '../../../components/SetupPageFrame';
+import { SetupSheet } from '../../../components/SetupSheet';
+import { EmptyState, ErrorState, LoadingState } from '../../../components/StatusViews';
+import { SummaryCard } from '../../../components/SummaryCard';
+import { VisibilityControl } from '../../../components/VisibilityControl';
+import { ApiRequestError } from '../../../hooks/api';
+import { useSavedRevisionNotice } from '../../../hooks/editor';
+import { describeError } from '../../../hooks/form';
+import { shareLinkFor, useDisplayUnits, usePhotoUpload } from '../../../hooks/garageUi';
+import { useDeleteSetup, useDeleteSetupPhoto, useSetupQuery, useUpdateSetupMeta } from '../../../hooks/setups';
+import type { Photo, SetupDetail } from '../../../shared/types/setups';
+import { useTheme } from '../../../theme';
+
+// A setup holds at most this many photos (server/services/setupPhotos.ts).
+const MAX_PHOTOS = 12;
+
+function messageOf(error: unknown): string | null {
+  return describeError(error, []).formError;
+}
+
+function OwnerVisibility({ setup }: { setup: SetupDetail }) {
+  const update = useUpdateSetupMeta(setup.id);
+  const shown = update.isPending && update.variables.visibility ? update.variables.visibility : setup.visibility;
+  return (
+    <VisibilityControl
+      value={shown}
+      onChange={(visibility) => update.mutate({ visibility })}
+      pending={update.isPending}
+      error={messageOf(update.error)}
+      shareLink={setup.shareToken ? shareLinkFor(setup.id, setup.shareToken) : null}
+    />
+  );
+}
+
+function Photos({ setup }: { setup: SetupDetail }) {
+  const [open, setOpen] = useState<Photo | null>(null);
+  const upload = usePhotoUpload(setup.id);
+  const remove = useDeleteSetupPhoto(setup.id);
+  const uploader = !setup.isOwner ? undefined : setup.photos.length >= MAX_PHOTOS ? null : (
+    <PhotoUploader
+      onPick={(file, caption) => upload.start(file, caption || undefined)}
+      progress={upload.progress}
+      error={messageOf(upload.error)}
+      done={upload.isSuccess}
+    />
+  );
+  return (
+    <>
+      <PhotoGallery photos={setup.photos} onOpen={setOpen} uploader={uploader} />
+      <PhotoViewer
+        photo={open}
+        onClose={() => {
+          setOpen(null);
+          remove.reset();
+        }}
+        onDelete={setup.isOwner && open ? () => remove.mutate(open.id, { onSuccess: () => setOpen(null) }) : undefined}
+        deleting={remove.isPending}
+        deleteError={messageOf(remove.error)}
+      />
+    </>
+  );
+}
+
+function SetupBody({ setup, share }: { setup: SetupDetail; share?: string }) {
+  const { isWide } = useTheme();
+  const units = useDisplayUnits();
+  const remove = useDeleteSetup(setup.id);
+  const saved = useSavedRevisionNotice(setup.id);
+  const values = setup.currentRevision.values;
+  const summary = <SummaryCard vehicleClass={setup.vehicleClass} values={values} units={units} />;
+  const safety = <SafetyNote vehicleClass={setup.vehicleClass} />;
+  const sheet = <SetupSheet vehicleClass={setup.vehicleClass} values={values} units={units} openAll={isWide} />;
+  const notes = <SetupNotes notesHtml={setup.notesHtml} editHref={setup.isOwner ? `/setups/${setup.id}/edit` : undefined} />;
+  const sharing = setup.isOwner ? <OwnerVisibility setup={setup} /> : null;
+  const rest = (
+    <>
+      <Photos setup={setup} />
+      <RevisionList revisions={setup.revisions} />
+    </>
+  );
+  return (
+    <>
+      {saved.notice ? <EditorSavedNotice notice={saved.notice} onDismiss={saved.dismiss} /> : null}
+      <SetupOverview setup={setup} units={units} />
+      <SetupActions
+        setupId={setup.id}
+        title={setup.title}
+        isOwner={setup.isOwner}
+        share={share}
+        onDelete={() => remove.mutate(undefined, { onSuccess: () => router.replace('/garage') })}
+        deleting={remove.isPending}
+        deleteError={messageOf(remove.error)}
+      />
+      {/* Phones read top to bottom: figures first, then the sheet; wide screens put them side by side. */}
+      <SetupColumns
+        left={isWide ? <>{sheet}{notes}</> : <>{summary}{sheet}{notes}</>}
+        right={isWide ? <>{summary}{sharing}{rest}{safety}</> : <>{sharing}{safety}{rest}</>}
+      />
+    </>
+  );
+}
+
+export default function SetupScreen() {
+  const params = useLocalSearchParams<{ id: string; share?: string }>();
+  const id = Number(params.id);
+  const share = typeof params.share === 'string' && params.share ? params.share : undefined;
+  const setup = useSetupQuery(id, share);
+  const back = setup.data?.isOwner ? { href: '/garage', label: 'Back to Garage' } : { href: '/', label: 'Back to Discover' };
+  if (!Number.isSafeInteger(id) || id <= 0 || (setup.isError && setup.error instanceof ApiRequestError && setup.error.status === 404)) {
+    return (
+      <SetupPageFrame title="Setup not found" back={back}>
+        <EmptyState
+          title="No setup at this address"
+          message="It may be private, deleted, or the link is missing the part after “share=”. Ask whoever sent it for the full link."
+          actionLabel="Find setups on Discover"
+          onAction={() => router.replace('/')}
+        />
+      </SetupPageFrame>
+    );
+  }
+  if (setup.isPending) {
+    return (
+      <SetupPageFrame title="Setup" back={back}>
+        <LoadingState label="Loading the setup…" />
+      </SetupPageFrame>
+    );
+  }
+  if (setup.isError) {
+    return (
+      <SetupPageFrame title="Setup" back={back}>
+        <ErrorState title="This setup could not load" message={setup.error.message} onRetry={() => void setup.refetch()} />
+      </SetupPageFrame>
+    );
+  }
+  return (
+    <SetupPageFrame title={setup.data.title} back={back}>
+      <SetupBody setup={setup.data} share={share} />
+    </SetupPageFrame>
+  );
+}

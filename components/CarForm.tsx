@@ -1,0 +1,65 @@
+import { StyleSheet, View } from 'react-native';
+import { useForm } from '../hooks/form';
+import type { KitSummary } from '../shared/types/catalog';
+import { carCreateSchema, type CarCreate } from '../shared/types/setups';
+import { vehicleClassLabel } from '../shared/types/vehicleClasses';
+import { z } from '../shared/types/zod';
+import { space } from '../theme';
+import { Button } from './Button';
+import { CarStockCheckbox } from './CarStockCheckbox';
+import { FormErrorBanner } from './FormErrorBanner';
+import { SetupRadioList } from './SetupRadioList';
+import { TextField } from './TextField';
+
+export type CarFormProps = {
+  kits: KitSummary[];
+  onSubmit: (values: CarCreate) => unknown;
+  pending: boolean;
+  error: unknown;
+};
+
+// Same rules as the server, with a message for "no kit picked yet" instead of zod's number wording.
+const schema = carCreateSchema.extend({ kitId: z.number().int().positive('Pick the kit your car is built from.') });
+
+type Values = { kitId: number; nickname: string; stock: boolean };
+const INITIAL: Values = { kitId: 0, nickname: '', stock: false };
+
+/** A new car: which kit it is, what you call it, and whether it is stock. */
+export function CarForm({ kits, onSubmit, pending, error }: CarFormProps) {
+  const form = useForm({ initial: INITIAL, schema, onSubmit, serverError: error, pending });
+  const options = kits.map((kit) => ({
+    value: kit.id,
+    label: `${kit.makerName} ${kit.name}`,
+    description: vehicleClassLabel(kit.vehicleClass),
+  }));
+  return (
+    <View style={styles.form}>
+      <FormErrorBanner message={form.formError} />
+      <SetupRadioList
+        label="Kit"
+        options={options}
+        value={form.values.kitId || null}
+        onChange={(kitId) => form.setField('kitId', kitId)}
+        error={form.fieldErrors.kitId}
+        disabled={pending}
+      />
+      <TextField
+        label="Name for the car"
+        hint="Whatever you call it in the pits, such as “Blue one” or “Spare”."
+        value={form.values.nickname}
+        onChangeText={(text) => form.setField('nickname', text)}
+        error={form.fieldErrors.nickname}
+        maxLength={60}
+        editable={!pending}
+        returnKeyType="done"
+        onSubmitEditing={() => void form.submit()}
+      />
+      <CarStockCheckbox checked={form.values.stock} onChange={(stock) => form.setField('stock', stock)} disabled={pending} />
+      <Button label="Add the car" busy={pending} busyLabel="Adding the car…" onPress={() => void form.submit()} />
+    </View>
+  );
+}
+
+const styles = StyleSheet.create({
+  form: { gap: space.lg },
+});
