@@ -49,8 +49,11 @@ it('a racer adds a car, starts a setup from the stock sheet, changes two fields 
 
   await page.getByRole('link', { name: 'Edit the sheet' }).click();
   await page.waitForURL((url) => url.pathname === `${setupPath}/edit`);
-  await page.getByRole('button', { name: /Increase rear shock oil/i }).click();
-  await page.getByRole('button', { name: /Increase spur gear/i }).click();
+  // Sections start folded on a phone: jump to each one, which opens it.
+  await page.getByRole('button', { name: 'Go to Shocks' }).click();
+  await page.getByRole('button', { name: 'Increase rear shock oil' }).click();
+  await page.getByRole('button', { name: 'Go to Gearing' }).click();
+  await page.getByRole('button', { name: 'Increase spur gear' }).click();
   await page.getByText(/2 fields changed/i).first().waitFor();
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
   await page.getByLabel(/Change note/).fill('Thicker rear oil and one more spur tooth for the long straight.');
@@ -71,7 +74,29 @@ it('a racer adds a car, starts a setup from the stock sheet, changes two fields 
 
   await page.getByRole('link', { name: 'Pit sheet to print' }).click();
   await page.waitForURL((url) => url.pathname === `${setupPath}/print`);
-  await page.getByText(/Revision 2/).first().waitFor();
+  await page.getByText(/Revision 2/).filter({ visible: true }).first().waitFor();
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
+  expect(w.consoleErrors).toEqual([]);
+  expect(await w.cspViolations()).toEqual([]);
+  await w.context.close();
+});
+
+it('shows a public demo setup read-only to a visitor, and its pit sheet, clean under axe (wide)', async () => {
+  const w = await openWatchedPage(browser, VIEWPORTS.wide);
+  const { page } = w;
+  const res = await page.request.get(`${server.baseUrl}/api/racers/juno_braithwick`);
+  expect(res.ok()).toBe(true);
+  await page.goto(`${server.baseUrl}/garage`);
+  await page.getByRole('heading', { name: 'Garage', level: 1 }).waitFor();
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
+  // The first demo setup of the seeded world is Juno's public loose-and-dusty sheet.
+  await page.goto(`${server.baseUrl}/setups/1`);
+  await page.getByRole('heading', { name: /Hollow Pines/, level: 1 }).waitFor();
+  expect(await page.getByRole('link', { name: 'Edit the sheet' }).count()).toBe(0);
+  await page.getByText(/Final drive/).first().waitFor();
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
+  await page.goto(`${server.baseUrl}/setups/1/print`);
+  await page.getByRole('button', { name: 'Print' }).waitFor();
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
   expect(w.consoleErrors).toEqual([]);
   expect(await w.cspViolations()).toEqual([]);
