@@ -138,3 +138,10 @@ export function useUploadSetupPhoto(id: number) {
     onSuccess: write,
   });
 }
+
+/** Server-rendered preview of notes markdown: the same cleaning the saved notes get. */
+export function useMarkdownPreview() {
+  return useMutation({
+    mutationFn: async (markdown: string) => (await apiMutate('/markdown/preview', { body: { markdown }, schema: z.object({ html: z.string() }) })).html,
+  });
+}

@@ -34,11 +34,13 @@ export DATABASE_URL="postgres://tunefork@127.0.0.1:$PG_PORT/tunefork_test"
 export TUNEFORK_E2E_DATABASE_URL="postgres://tunefork@127.0.0.1:$PG_PORT/tunefork_e2e"
 export TUNEFORK_TEST_PGDATA="$PG_DIR"
 export TUNEFORK_TEST_PGPORT="$PG_PORT"
+# Photo files of the seeded e2e world; the e2e server reads them from the same folder.
+export TUNEFORK_E2E_DATA_DIR="$TMP/e2e-data"
 
 ./node_modules/.bin/tsx server/db/cli.ts migrate >/dev/null || die "migrations failed on the test database"
 DATABASE_URL="$TUNEFORK_E2E_DATABASE_URL" ./node_modules/.bin/tsx server/db/cli.ts migrate >/dev/null \
   || die "migrations failed on the e2e database"
-DATABASE_URL="$TUNEFORK_E2E_DATABASE_URL" ./node_modules/.bin/tsx server/db/cli.ts seed >/dev/null \
+DATABASE_URL="$TUNEFORK_E2E_DATABASE_URL" DATA_DIR="$TUNEFORK_E2E_DATA_DIR" ./node_modules/.bin/tsx server/db/cli.ts seed >/dev/null \
   || die "seeding the e2e database failed"
 if web_export_stale; then build_web; fi
 

@@ -19,6 +19,7 @@ import { catalogRouter } from './routes/catalog';
 import { devRouter } from './routes/dev';
 import { garageRouter } from './routes/garage';
 import { healthRouter } from './routes/health';
+import { markdownRouter } from './routes/markdown';
 import { meRouter } from './routes/me';
 import { photosRouter } from './routes/photos';
 import { racersRouter } from './routes/racers';
@@ -68,6 +69,7 @@ function apiRouter(deps: RouterDeps): Router {
   api.use('/racers', racersRouter(deps));
   api.use('/admin', adminRouter(deps));
   api.use('/setups', setupsRouter(deps));
+  api.use('/markdown', markdownRouter(deps));
   api.use('/', garageRouter(deps));
   if (deps.config.nodeEnv !== 'production') api.use('/dev', devRouter(deps));
   api.use('/', catalogRouter(deps));

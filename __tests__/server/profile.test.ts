@@ -98,3 +98,14 @@ describe('settings', () => {
     expect((await there.agent.get('/api/me')).body.user).toBeNull();
   });
 });
+
+describe('markdown preview', () => {
+  it('renders exactly what the server will store: safe tags only, links marked', async () => {
+    const r = await createRacer(t.db);
+    const { agent, csrf } = await signIn(t.app, r.handle, r.password);
+    const res = await agent.post('/api/markdown/preview').set('X-CSRF-Token', csrf).send({ markdown: '**450** [why](https://notes.example) <script>x()</script>' }).expect(200);
+    expect(res.body.html.trim()).toBe('<p><strong>450</strong> <a href="https://notes.example" rel="nofollow ugc noopener">why</a> </p>');
+    const tooLong = await agent.post('/api/markdown/preview').set('X-CSRF-Token', csrf).send({ markdown: 'x'.repeat(20_001) });
+    expect(tooLong.status).toBe(400);
+  });
+});

@@ -51,6 +51,7 @@ const EXPECTED: Record<string, Access> = {
   'POST /api/setups/:id/photos': 'signedIn',
   'DELETE /api/setups/:id/photos/:photoId': 'signedIn',
   'GET /api/photos/:key': 'public',
+  'POST /api/markdown/preview': 'signedIn',
 };
 
 type Layer = { route?: { methods: Record<string, boolean> }; handle?: { stack?: Layer[] } };

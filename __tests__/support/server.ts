@@ -36,8 +36,8 @@ export async function startServer(env: Record<string, string> = {}): Promise<Run
       DATABASE_URL: databaseUrl,
       PORT: String(port),
       HOST: '127.0.0.1',
-      // Uploaded photos of a browser run go to a throwaway folder.
-      DATA_DIR: fs.mkdtempSync(path.join(os.tmpdir(), 'tunefork-e2e-data-')),
+      // Photos of the seeded world and of a browser run live in a throwaway folder.
+      DATA_DIR: process.env.TUNEFORK_E2E_DATA_DIR ?? fs.mkdtempSync(path.join(os.tmpdir(), 'tunefork-e2e-data-')),
       ...env,
     },
     stdio: ['ignore', 'pipe', 'pipe'],

@@ -9,6 +9,7 @@ import { loadConfig } from '../config';
 import { createDatabase } from './database';
 import { createMigrator } from './migrator';
 import { isDatabaseEmpty, seedDemoWorld } from '../seeders';
+import { createStorage } from '../storage';
 
 async function main(command: string | undefined): Promise<void> {
   const config = loadConfig();
@@ -27,12 +28,12 @@ async function main(command: string | undefined): Promise<void> {
         break;
       }
       case 'seed':
-        await seedDemoWorld(db, { bcryptCost: config.bcryptCost });
+        await seedDemoWorld(db, { bcryptCost: config.bcryptCost, photos: { storage: createStorage(config.storage), config } });
         console.log('demo world seeded');
         break;
       case 'seed-if-empty':
         if (await isDatabaseEmpty(db)) {
-          await seedDemoWorld(db, { bcryptCost: config.bcryptCost });
+          await seedDemoWorld(db, { bcryptCost: config.bcryptCost, photos: { storage: createStorage(config.storage), config } });
           console.log('empty database: demo world seeded');
         } else {
           console.log('database has data: demo seed skipped');

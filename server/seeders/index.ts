@@ -1,6 +1,10 @@
 import type { Database } from '../db/database';
 import { hashPassword } from '../services/passwords';
 import { DEMO_CARS } from './demoSetups';
+import { DEMO_PHOTO_STYLES, drawDemoCarPhoto } from './demoPhotos';
+import type { BlobStorage } from '../storage';
+import type { Config } from '../config';
+import { storeUploadedPhoto } from '../services/photos';
 import { buildStockSheet } from './stockSheets';
 import type { Transaction } from 'sequelize';
 import crypto from 'node:crypto';
@@ -18,7 +22,13 @@ export async function isDatabaseEmpty(db: Database): Promise<boolean> {
  * Writes the invented demo world. Idempotent: rows are matched by slug or handle and
  * existing ones are left as they are, so running it twice changes nothing.
  */
-export async function seedDemoWorld(db: Database, options: { bcryptCost: number }): Promise<void> {
+export type SeedOptions = {
+  bcryptCost: number;
+  /** With storage, the public demo setups get a drawn photo each. */
+  photos?: { storage: BlobStorage; config: Pick<Config, 'photos'> };
+};
+
+export async function seedDemoWorld(db: Database, options: SeedOptions): Promise<void> {
   const { Maker, Kit, Track, User } = db.models;
   const passwordHashes = await Promise.all(DEMO_RACERS.map((r) => hashPassword(r.password, options.bcryptCost)));
   await db.sequelize.transaction(async (transaction) => {
@@ -58,6 +68,20 @@ export async function seedDemoWorld(db: Database, options: { bcryptCost: number 
     }
     await seedDemoGarages(db, transaction);
   });
+  if (options.photos) await seedDemoPhotos(db, options.photos);
+}
+
+/** One drawn photo on each styled public demo setup that has none yet. */
+async function seedDemoPhotos(db: Database, photos: NonNullable<SeedOptions['photos']>): Promise<void> {
+  for (const [title, style] of Object.entries(DEMO_PHOTO_STYLES)) {
+    const setup = await db.models.Setup.findOne({ where: { title } });
+    if (!setup) continue;
+    const { rowCount } = await db.pool.query('SELECT 1 FROM setup_photos WHERE setup_id = $1', [setup.id]);
+    if (rowCount) continue;
+    const buffer = await drawDemoCarPhoto(style);
+    const photo = await storeUploadedPhoto({ db, ...photos }, setup.ownerId, { buffer, originalname: 'demo.jpg', mimetype: 'image/jpeg' }, { caption: 'Side view in the pits' });
+    await db.pool.query('INSERT INTO setup_photos (setup_id, photo_id, position) VALUES ($1, $2, 0)', [setup.id, photo.id]);
+  }
 }
 
 /** Cars and setups of the demo racers, each revision one honest change; skipped for racers who have cars. */
