@@ -32,6 +32,8 @@ const EXPECTED: Record<string, Access> = {
   'PATCH /api/admin/users/:id/role': 'admin',
   'POST /api/admin/users/:id/suspend': 'admin',
   'POST /api/admin/users/:id/unsuspend': 'admin',
+  'POST /api/admin/kits': 'admin',
+  'PUT /api/admin/kits/:id/stock': 'admin',
   'GET /api/dev/mailbox': 'public',
   'GET /api/kits': 'public',
   'GET /api/kits/:id/stock': 'public',
@@ -117,7 +119,7 @@ describe('route × role access', () => {
     const [method, path] = key.split(' ');
     const url = path.replace(':handle', 'no-such-racer').replace(':id', '999999');
     const { agent, csrf } = await caller(who);
-    const res = await agent[method.toLowerCase() as 'get' | 'post' | 'patch' | 'delete'](url).set('X-CSRF-Token', csrf).send({});
+    const res = await agent[method.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete'](url).set('X-CSRF-Token', csrf).send({});
     if (allowed(access, who)) {
       expect([401, 403]).not.toContain(res.status);
     } else {

@@ -3,6 +3,7 @@ import { roleChangeRequestSchema, suspendRequestSchema } from '../../shared/type
 import type { RouterDeps } from '../app';
 import { declareRoutes } from '../middleware/access';
 import { changeRole, listUsers, suspendUser, unsuspendUser } from '../services/admin';
+import { createKit, updateKitStock } from '../services/kitAdmin';
 
 export function adminRouter(deps: RouterDeps): Router {
   const router = Router();
@@ -24,6 +25,13 @@ export function adminRouter(deps: RouterDeps): Router {
 
   r.post('/users/:id/unsuspend', 'admin', async (req, res) => {
     res.json({ user: await unsuspendUser(deps.db, Number(req.params.id)) });
+  });
+  r.post('/kits', 'admin', async (req, res) => {
+    res.status(201).json({ kit: await createKit(deps.db, req.body) });
+  });
+
+  r.put('/kits/:id/stock', 'admin', async (req, res) => {
+    res.json({ stock: await updateKitStock(deps.db, Number(req.params.id), req.body) });
   });
   return router;
 }
