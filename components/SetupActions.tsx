@@ -25,6 +25,7 @@ export function SetupActions({ setupId, title, isOwner, share, onDelete, deletin
     <Card role="region" aria-label="Setup actions">
       <View style={styles.row}>
         {isOwner ? <ButtonLink href={`/setups/${setupId}/edit`} label="Edit the sheet" /> : null}
+        {isOwner ? <ButtonLink href={`/setups/${setupId}/details`} label="Edit details" variant="secondary" /> : null}
         <ButtonLink href={`/setups/${setupId}/print${query}`} label="Pit sheet to print" variant="secondary" />
         <SetupExportLink path={`/setups/${setupId}/export.json${query}`} label="Export setup file (JSON)" />
         <SetupExportLink path={`/setups/${setupId}/export.csv${query}`} label="Export as CSV" />

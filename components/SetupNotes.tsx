@@ -17,7 +17,7 @@ export function SetupNotes({ notesHtml, editHref }: SetupNotesProps) {
     <Card>
       <AppText variant="heading">Notes</AppText>
       {empty ? <AppText tone="muted">No notes yet.</AppText> : <HtmlContent html={notesHtml} />}
-      {empty && editHref ? <ButtonLink href={editHref} label="Write notes in the editor" variant="secondary" /> : null}
+      {editHref ? <ButtonLink href={editHref} label={empty ? 'Write notes' : 'Edit notes'} variant="secondary" /> : null}
     </Card>
   );
 }

@@ -17,7 +17,7 @@ afterAll(async () => {
   await server?.stop();
 });
 
-it('a racer adds a car, starts a setup from the stock sheet, changes two fields with a note, adds a photo and prints (phone)', async () => {
+it('a racer adds a car, starts a setup from the stock sheet, changes two fields with a note, writes previewed notes, adds a photo and prints (phone)', async () => {
   const w = await openWatchedPage(browser, VIEWPORTS.phone);
   const { page } = w;
   // The demo newcomer, signed in through the API so the browser shares the session cookie.
@@ -60,6 +60,17 @@ it('a racer adds a car, starts a setup from the stock sheet, changes two fields 
   await page.getByRole('button', { name: 'Save revision 2' }).click();
   await page.waitForURL((url) => url.pathname === setupPath);
   await page.getByText('Thicker rear oil and one more spur tooth for the long straight.').first().waitFor();
+
+  // Notes in markdown, previewed as the server will show them.
+  await page.getByRole('link', { name: 'Edit details' }).click();
+  await page.waitForURL((url) => url.pathname === `${setupPath}/details`);
+  await page.getByLabel('Notes', { exact: true }).fill('Rear oil **450** felt right on the bumps.');
+  await page.getByRole('tab', { name: 'Preview notes' }).click();
+  await page.locator('strong', { hasText: '450' }).first().waitFor();
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
+  await page.getByRole('button', { name: 'Save details' }).click();
+  await page.waitForURL((url) => url.pathname === setupPath);
+  await page.locator('strong', { hasText: '450' }).first().waitFor();
 
   // Slow the upload down so the progress bar has time to be seen.
   const cdp = await w.context.newCDPSession(page);

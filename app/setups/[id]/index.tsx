@@ -81,7 +81,7 @@ function SetupBody({ setup, share }: { setup: SetupDetail; share?: string }) {
   const summary = <SummaryCard vehicleClass={setup.vehicleClass} values={values} units={units} />;
   const safety = <SafetyNote vehicleClass={setup.vehicleClass} />;
   const sheet = <SetupSheet vehicleClass={setup.vehicleClass} values={values} units={units} openAll={isWide} />;
-  const notes = <SetupNotes notesHtml={setup.notesHtml} editHref={setup.isOwner ? `/setups/${setup.id}/edit` : undefined} />;
+  const notes = <SetupNotes notesHtml={setup.notesHtml} editHref={setup.isOwner ? `/setups/${setup.id}/details` : undefined} />;
   const sharing = setup.isOwner ? <OwnerVisibility setup={setup} /> : null;
   const rest = (
     <>
