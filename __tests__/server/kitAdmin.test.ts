@@ -30,17 +30,23 @@ describe('admin-managed kits', () => {
     expect(again.status).toBe(409);
   });
 
+  /** A fresh 1/8 nitro kit per test, so the shared demo kits are never changed under other tests. */
+  async function newNitroKit(name: string): Promise<number> {
+    const res = await admin.agent.post('/api/admin/kits').set('X-CSRF-Token', admin.csrf).send({ makerName: 'Fernhollow Models', name, vehicleClass: 'buggy-1-8-nitro' }).expect(201);
+    return res.body.kit.id;
+  }
+
   it('sets a stock sheet checked against the class template, with in-box options', async () => {
-    const id = await kitId(t.db, 'ottervale-stoat-8n');
-    const current = (await request(t.app).get(`/api/kits/${id}/stock`)).body.stock;
+    const id = await newNitroKit('Kite 8N');
+    const current = (await request(t.app).get(`/api/kits/${await kitId(t.db, 'ottervale-stoat-8n')}/stock`)).body.stock;
     const values = { ...current.values, 'gear.clutch-bell': 14 };
     const res = await admin.agent.put(`/api/admin/kits/${id}/stock`).set('X-CSRF-Token', admin.csrf).send({ values, inBox: current.inBox }).expect(200);
     expect(res.body.stock.values['gear.clutch-bell']).toBe(14);
   });
 
   it('refuses out-of-range stock values and in-box options the field does not have', async () => {
-    const id = await kitId(t.db, 'ottervale-stoat-8n');
-    const current = (await request(t.app).get(`/api/kits/${id}/stock`)).body.stock;
+    const id = await newNitroKit('Kite 8N Pro');
+    const current = (await request(t.app).get(`/api/kits/${await kitId(t.db, 'ottervale-stoat-8n')}/stock`)).body.stock;
     const badValue = await admin.agent
       .put(`/api/admin/kits/${id}/stock`)
       .set('X-CSRF-Token', admin.csrf)

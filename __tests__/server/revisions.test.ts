@@ -24,11 +24,12 @@ function save(setupId: number, body: object) {
 describe('saving revisions', () => {
   it('adds an immutable revision with the change note and counts the changed fields', async () => {
     const { setup } = await carWithStockSetup(owner, stoat8n);
-    const values = { ...setup.currentRevision.values, 'shock.rear.oil': 500, 'gear.clutch-bell': 14 };
+    const before = setup.currentRevision.values as Record<string, number>;
+    const values = { ...before, 'shock.rear.oil': before['shock.rear.oil'] + 50, 'gear.clutch-bell': before['gear.clutch-bell'] + 1 };
     const res = await save(setup.id, { baseRevisionId: setup.currentRevision.id, values, changeNote: 'Thicker rear oil and a bigger bell for the long straight.' });
     expect(res.status).toBe(201);
     expect(res.body.setup.currentRevision).toMatchObject({ number: 2, changeNote: 'Thicker rear oil and a bigger bell for the long straight.' });
-    expect(res.body.setup.currentRevision.values['shock.rear.oil']).toBe(500);
+    expect(res.body.setup.currentRevision.values['shock.rear.oil']).toBe(before['shock.rear.oil'] + 50);
     expect(res.body.setup.revisions.map((r: { number: number; changedFieldCount: number }) => [r.number, r.changedFieldCount])).toEqual([
       [2, 2],
       [1, 0],
