@@ -53,6 +53,8 @@ const EXPECTED: Record<string, Access> = {
   'POST /api/setups/:id/photos': 'signedIn',
   'DELETE /api/setups/:id/photos/:photoId': 'signedIn',
   'GET /api/photos/:key': 'public',
+  'POST /api/setups/:id/forks': 'signedIn',
+  'GET /api/setups/:id/family': 'public',
   'POST /api/markdown/preview': 'signedIn',
 };
 

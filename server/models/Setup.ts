@@ -24,6 +24,8 @@ export class Setup extends Model<InferAttributes<Setup>, InferCreationAttributes
   declare forkedFromSetupId: CreationOptional<number | null>;
   declare forkedFromRevisionId: CreationOptional<number | null>;
   declare familyRootId: CreationOptional<number | null>;
+  /** The original's revision this fork last took values from (fork point or last sync). */
+  declare upstreamRevisionId: CreationOptional<number | null>;
   declare hiddenAt: CreationOptional<Date | null>;
   declare deletedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
@@ -51,6 +53,7 @@ export class Setup extends Model<InferAttributes<Setup>, InferCreationAttributes
         forkedFromSetupId: { type: DataTypes.INTEGER, allowNull: true },
         forkedFromRevisionId: { type: DataTypes.INTEGER, allowNull: true },
         familyRootId: { type: DataTypes.INTEGER, allowNull: true },
+        upstreamRevisionId: { type: DataTypes.INTEGER, allowNull: true },
         hiddenAt: { type: DataTypes.DATE, allowNull: true },
         deletedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,

@@ -3,6 +3,8 @@ import { setupImportSchema } from '../../shared/types/setups';
 import type { RouterDeps } from '../app';
 import { declareRoutes } from '../middleware/access';
 import { photoUploadMiddleware, requireUploadedPhoto } from '../services/photos';
+import { getFamily } from '../services/family';
+import { forkSetup } from '../services/forks';
 import { saveRevision } from '../services/revisions';
 import { addSetupPhoto, removeSetupPhoto } from '../services/setupPhotos';
 import { findViewableSetup } from '../services/setupAccess';
@@ -60,6 +62,15 @@ export function setupsRouter(deps: RouterDeps): Router {
   r.delete('/:id/photos/:photoId', 'signedIn', async (req, res) => {
     await removeSetupPhoto(deps, req.user!, Number(req.params.id), Number(req.params.photoId));
     res.json({ setup: await getSetupDetail(db, Number(req.params.id), req.user) });
+  });
+
+  r.post('/:id/forks', 'signedIn', async (req, res) => {
+    const fork = await forkSetup(db, req.user!, Number(req.params.id), req.body);
+    res.status(201).json({ setup: await getSetupDetail(db, fork.id, req.user) });
+  });
+
+  r.get('/:id/family', 'public', async (req, res) => {
+    res.json(await getFamily(db, Number(req.params.id), req.user, shareToken(req)));
   });
 
   r.get('/:id/export.json', 'public', async (req, res) => {

@@ -2,6 +2,7 @@ import type { MigrationContext } from '../migrator';
 import * as demoWorld from './20261202T0000-catalog-and-racers';
 import * as accounts from './20261202T0100-accounts';
 import * as garage from './20261202T0200-garage-and-setups';
+import * as forks from './20261202T0300-forks';
 
 export type Migration = {
   name: string;
@@ -14,4 +15,5 @@ export const migrations: Migration[] = [
   { name: '20261202T0000-catalog-and-racers', ...demoWorld },
   { name: '20261202T0100-accounts', ...accounts },
   { name: '20261202T0200-garage-and-setups', ...garage },
+  { name: '20261202T0300-forks', ...forks },
 ];

@@ -34,3 +34,4 @@ export {
 export { PLAUSIBLE_RIDE_HEIGHT_MM, checkRideHeightPlausibility, type RangeMm } from './plausibility';
 export { computeSetupSummary, SUMMARY_KEYS, type SetupSummaryFigures, type SummaryFigure } from './summary';
 export { diffSetupValues, type FieldChange } from './diff';
+export { applyDiff, applyMerge, threeWayMerge, upstreamChanges, type FieldMerge, type MergeChoice, type MergeStatus } from './merge';
