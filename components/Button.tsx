@@ -1,5 +1,5 @@
 import { ActivityIndicator, Pressable, StyleSheet } from 'react-native';
-import { layout, radius, space, useTheme } from '../theme';
+import { pillStyles, space, useTheme } from '../theme';
 import { AppText } from './AppText';
 
 export type ButtonProps = {
@@ -47,17 +47,7 @@ export function Button({ label, onPress, variant = 'primary', disabled, busy, bu
 }
 
 const styles = StyleSheet.create({
-  button: {
-    minHeight: layout.minTouchTarget,
-    minWidth: layout.minTouchTarget,
-    paddingHorizontal: space.lg,
-    borderRadius: radius.pill,
-    borderWidth: 1,
-    flexDirection: 'row',
-    gap: space.sm,
-    alignItems: 'center',
-    justifyContent: 'center',
-    alignSelf: 'flex-start',
-  },
-  label: { fontWeight: '700' },
+  // A spinner sits beside the label while busy.
+  button: { ...pillStyles.button, flexDirection: 'row', gap: space.sm },
+  label: pillStyles.label,
 });

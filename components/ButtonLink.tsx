@@ -1,6 +1,6 @@
 import { Link, type Href } from 'expo-router';
 import { Pressable, StyleSheet } from 'react-native';
-import { layout, radius, space, useTheme } from '../theme';
+import { pillStyles, useTheme } from '../theme';
 import { AppText } from './AppText';
 
 export type ButtonLinkProps = { href: Href; label: string; variant?: 'primary' | 'secondary' };
@@ -23,16 +23,4 @@ export function ButtonLink({ href, label, variant = 'primary' }: ButtonLinkProps
   );
 }
 
-const styles = StyleSheet.create({
-  button: {
-    minHeight: layout.minTouchTarget,
-    minWidth: layout.minTouchTarget,
-    paddingHorizontal: space.lg,
-    borderRadius: radius.pill,
-    borderWidth: 1,
-    alignItems: 'center',
-    justifyContent: 'center',
-    alignSelf: 'flex-start',
-  },
-  label: { fontWeight: '700' },
-});
+const styles = pillStyles;

@@ -1,7 +1,7 @@
 import { createElement } from 'react';
-import { Linking, Platform, Pressable, StyleSheet } from 'react-native';
+import { Linking, Platform, Pressable } from 'react-native';
 import { apiUrl } from '../hooks/api';
-import { fonts, layout, radius, space, type as typeScale, useTheme } from '../theme';
+import { fonts, layout, pillStyles, radius, space, type as typeScale, useTheme } from '../theme';
 import { AppText } from './AppText';
 
 export type SetupExportLinkProps = {
@@ -60,16 +60,4 @@ export function SetupExportLink({ path, label }: SetupExportLinkProps) {
   );
 }
 
-const styles = StyleSheet.create({
-  button: {
-    minHeight: layout.minTouchTarget,
-    minWidth: layout.minTouchTarget,
-    paddingHorizontal: space.lg,
-    borderRadius: radius.pill,
-    borderWidth: 1,
-    alignItems: 'center',
-    justifyContent: 'center',
-    alignSelf: 'flex-start',
-  },
-  label: { fontWeight: '700' },
-});
+const styles = pillStyles;

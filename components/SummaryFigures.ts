@@ -1,4 +1,4 @@
-import { computeSetupSummary, formatForDisplay, SUMMARY_KEYS, type SummaryFigure } from '../shared/compute/setup';
+import { computeSetupSummary, formatForDisplay, type SummaryFigure } from '../shared/compute/setup';
 import type { UnitPreferences } from '../shared/types/auth';
 import type { StoredSetupValues } from '../shared/types/setups';
 import { fieldsByKey, getTemplate } from '../shared/types/templates';
@@ -19,14 +19,6 @@ function ratio(value: number): string {
 /** Racers who read inches read speed in mph; everyone else in km/h. */
 function speed(kmh: number, units: UnitPreferences): string {
   return units.length === 'in' ? `${Math.round(kmh / KM_PER_MILE)} mph` : `${Math.round(kmh)} km/h`;
-}
-
-const DRIVE_PINION_KEYS: readonly string[] = SUMMARY_KEYS.pinion;
-
-/** Guards the wording: a missing drive pinion is named by the key this class's sheet really has. */
-function fieldForMissing(key: string, has: (key: string) => boolean): string {
-  if (has(key) || !DRIVE_PINION_KEYS.includes(key)) return key;
-  return DRIVE_PINION_KEYS.find(has) ?? key;
 }
 
 /**
@@ -56,8 +48,7 @@ export function summaryLines(vehicleClass: VehicleClassKey, values: StoredSetupV
   }
   return rows.map(({ key, label, figure, show }): SummaryLine => {
     if (figure.value !== null) return { key, label, state: 'value', text: show(figure.value) };
-    const has = (k: string) => fields.has(k);
-    const unique = [...new Set(figure.missing.map((k) => fieldForMissing(k, has)))];
+    const unique = [...new Set(figure.missing)];
     if (unique.some((k) => !fields.has(k))) return { key, label, state: 'unavailable' };
     return { key, label, state: 'missing', fieldLabels: unique.map((k) => fields.get(k)?.label ?? k) };
   });

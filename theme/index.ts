@@ -1,2 +1,3 @@
 export * from './tokens';
 export * from './ThemeProvider';
+export * from './pill';

@@ -1,8 +1,8 @@
 import { router, useLocalSearchParams } from 'expo-router';
+import { CarsRequired } from '../../components/CarsRequired';
 import { Screen } from '../../components/Screen';
 import { SetupCreateForm } from '../../components/SetupCreateForm';
 import { SignedInGate } from '../../components/SignedInGate';
-import { EmptyState, ErrorState, LoadingState } from '../../components/StatusViews';
 import { signInHref, useMeQuery } from '../../hooks/auth';
 import { useDisplayUnits } from '../../hooks/garageUi';
 import { useCreateSetup, useGarageQuery } from '../../hooks/setups';
@@ -11,29 +11,23 @@ function NewSetup({ carId }: { carId: number | null }) {
   const garage = useGarageQuery();
   const create = useCreateSetup();
   const units = useDisplayUnits();
-  if (garage.isPending) return <LoadingState label="Loading your cars…" />;
-  if (garage.isError) {
-    return <ErrorState title="Your cars could not load" message={garage.error.message} onRetry={() => void garage.refetch()} />;
-  }
-  if (garage.data.cars.length === 0) {
-    return (
-      <EmptyState
-        title="A setup needs a car"
-        message="Add the car you race first; its kit decides which sheet the setup uses."
-        actionLabel="Add a car"
-        onAction={() => router.replace('/garage/add-car')}
-      />
-    );
-  }
   return (
-    <SetupCreateForm
-      cars={garage.data.cars}
-      initialCarId={carId}
-      units={units}
-      pending={create.isPending}
-      error={create.error}
-      onSubmit={(input) => create.mutateAsync(input).then((setup) => router.replace(`/setups/${setup.id}`))}
-    />
+    <CarsRequired
+      garage={garage}
+      emptyTitle="A setup needs a car"
+      emptyMessage="Add the car you race first; its kit decides which sheet the setup uses."
+    >
+      {(cars) => (
+        <SetupCreateForm
+          cars={cars}
+          initialCarId={carId}
+          units={units}
+          pending={create.isPending}
+          error={create.error}
+          onSubmit={(input) => create.mutateAsync(input).then((setup) => router.replace(`/setups/${setup.id}`))}
+        />
+      )}
+    </CarsRequired>
   );
 }
 

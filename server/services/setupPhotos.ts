@@ -1,12 +1,9 @@
-import type { Photo as PhotoDto } from '../../shared/types/setups';
+import { MAX_PHOTOS_PER_SETUP, type Photo as PhotoDto } from '../../shared/types/setups';
 import type { Database } from '../db/database';
 import { ApiError } from '../errors';
 import type { User } from '../models/User';
 import { deletePhoto, photoUrls, storeUploadedPhoto, type PhotoDeps, type UploadedPhotoFile } from './photos';
 import { findOwnSetup } from './setupAccess';
-
-/** A setup page has room for a dozen photos; more is a gallery, not a setup sheet. */
-export const MAX_PHOTOS_PER_SETUP = 12;
 
 /** Photos attached to a setup, in their order; hidden photos are left out. */
 export async function listSetupPhotos(db: Database, setupId: number): Promise<PhotoDto[]> {

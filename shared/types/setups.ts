@@ -76,6 +76,9 @@ export const revisionSummarySchema = z.object({
 });
 export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
 
+/** A setup page has room for a dozen photos; more is a gallery, not a setup sheet. */
+export const MAX_PHOTOS_PER_SETUP = 12;
+
 export const photoSchema = z.object({
   id: z.number().int(),
   url: z.string(),

@@ -19,11 +19,9 @@ import { useSavedRevisionNotice } from '../../../hooks/editor';
 import { describeError } from '../../../hooks/form';
 import { shareLinkFor, useDisplayUnits, usePhotoUpload } from '../../../hooks/garageUi';
 import { useDeleteSetup, useDeleteSetupPhoto, useSetupQuery, useUpdateSetupMeta } from '../../../hooks/setups';
-import type { Photo, SetupDetail } from '../../../shared/types/setups';
+import { MAX_PHOTOS_PER_SETUP, type Photo, type SetupDetail } from '../../../shared/types/setups';
 import { useTheme } from '../../../theme';
 
-// A setup holds at most this many photos (server/services/setupPhotos.ts).
-const MAX_PHOTOS = 12;
 
 function messageOf(error: unknown): string | null {
   return describeError(error, []).formError;
@@ -47,7 +45,7 @@ function Photos({ setup }: { setup: SetupDetail }) {
   const [open, setOpen] = useState<Photo | null>(null);
   const upload = usePhotoUpload(setup.id);
   const remove = useDeleteSetupPhoto(setup.id);
-  const uploader = !setup.isOwner ? undefined : setup.photos.length >= MAX_PHOTOS ? null : (
+  const uploader = !setup.isOwner ? undefined : setup.photos.length >= MAX_PHOTOS_PER_SETUP ? null : (
     <PhotoUploader
       onPick={(file, caption) => upload.start(file, caption || undefined)}
       progress={upload.progress}
