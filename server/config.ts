@@ -32,6 +32,8 @@ const envSchema = z.object({
   FAKE_SMTP_PORT: z.coerce.number().int().min(0).max(65535).default(0),
   AUTH_RATE_LIMIT_MAX: z.coerce.number().int().min(1).default(20),
   AUTH_RATE_LIMIT_WINDOW_MS: z.coerce.number().int().min(1000).default(15 * 60_000),
+  COMMENT_RATE_LIMIT_PER_MINUTE: z.coerce.number().int().min(1).default(6),
+  COMMENT_RATE_LIMIT_PER_HOUR: z.coerce.number().int().min(1).default(60),
   DATA_DIR: z.string().min(1).default('.data'),
   STORAGE_DRIVER: z.enum(['local', 's3']).default('local'),
   S3_ENDPOINT: z.url({ error: 'S3_ENDPOINT must be a URL such as http://127.0.0.1:4569' }).optional(),
@@ -62,6 +64,8 @@ export type Config = {
   github: { clientId: string; clientSecret: string; useFakeProvider: boolean } | null;
   mail: { smtpUrl: string | null; from: string; fakeSmtpPort: number };
   authRateLimit: { max: number; windowMs: number };
+  /** Comments one racer may post: a short window against bursts, a long one against a steady drip. */
+  commentRateLimit: { burst: { max: number; windowMs: number }; sustained: { max: number; windowMs: number } };
   dataDir: string;
   storage:
     | { driver: 'local'; directory: string }
@@ -139,6 +143,10 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     github: githubSettings(e),
     mail: { smtpUrl: e.SMTP_URL ?? null, from: e.MAIL_FROM, fakeSmtpPort: e.FAKE_SMTP_PORT },
     authRateLimit: { max: e.AUTH_RATE_LIMIT_MAX, windowMs: e.AUTH_RATE_LIMIT_WINDOW_MS },
+    commentRateLimit: {
+      burst: { max: e.COMMENT_RATE_LIMIT_PER_MINUTE, windowMs: 60_000 },
+      sustained: { max: e.COMMENT_RATE_LIMIT_PER_HOUR, windowMs: 60 * 60_000 },
+    },
     dataDir: path.resolve(e.DATA_DIR),
     storage: storageSettings(e),
     photos: { maxBytes: e.PHOTO_MAX_BYTES, maxPixels: e.PHOTO_MAX_PIXELS },

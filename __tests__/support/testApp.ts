@@ -17,6 +17,7 @@ export function testConfig(overrides: Partial<Config> = {}): Config {
     ...loadConfig({ ...process.env, NODE_ENV: 'test' }),
     authRateLimit: { max: 100_000, windowMs: 60_000 },
     apiRateLimit: { max: 100_000, windowMs: 60_000 },
+    commentRateLimit: { burst: { max: 100_000, windowMs: 60_000 }, sustained: { max: 100_000, windowMs: 60_000 } },
     // Photos go to a throwaway folder, never into the repository's .data.
     storage: { driver: 'local', directory: fs.mkdtempSync(path.join(os.tmpdir(), 'tunefork-photos-')) },
     ...overrides,

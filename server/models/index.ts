@@ -9,8 +9,9 @@ import { Car } from './Car';
 import { Setup } from './Setup';
 import { SetupRevision } from './SetupRevision';
 import { Photo } from './Photo';
+import { Comment } from './Comment';
 
-export { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision, Photo };
+export { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision, Photo, Comment };
 
 export type Models = {
   Maker: typeof Maker;
@@ -23,6 +24,7 @@ export type Models = {
   Setup: typeof Setup;
   SetupRevision: typeof SetupRevision;
   Photo: typeof Photo;
+  Comment: typeof Comment;
 };
 
 /** Registers every model on `sequelize` and wires the associations. */
@@ -37,6 +39,7 @@ export function initModels(sequelize: Sequelize): Models {
   Setup.initModel(sequelize);
   SetupRevision.initModel(sequelize);
   Photo.initModel(sequelize);
+  Comment.initModel(sequelize);
 
   Maker.hasMany(Kit, { foreignKey: 'makerId', as: 'kits' });
   Kit.belongsTo(Maker, { foreignKey: 'makerId', as: 'maker' });
@@ -44,6 +47,8 @@ export function initModels(sequelize: Sequelize): Models {
   Setup.belongsTo(Car, { foreignKey: 'carId', as: 'car' });
   Setup.belongsTo(User, { foreignKey: 'ownerId', as: 'owner' });
   SetupRevision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  Comment.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
+  Comment.belongsTo(SetupRevision, { foreignKey: 'revisionId', as: 'revision' });
 
-  return { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision, Photo };
+  return { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision, Photo, Comment };
 }
