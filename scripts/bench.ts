@@ -2,6 +2,9 @@
  * Measures the API over loopback against a server it starts (see scripts/bench.sh):
  *   setup view   GET /api/setups/:id of a public demo setup, 8 clients in parallel
  *   setup save   POST /api/setups/:id/revisions, one client saving one change after another
+ *   fork         POST /api/setups/:id/forks, one client growing a family of FAMILY_SIZE forks, each
+ *                forking a random earlier member (so the tree is both wide and deep)
+ *   family       GET /api/setups/:id/family of that family's root (all FAMILY_SIZE forks below it)
  * Prints requests per second and latency percentiles. Figures vary with the machine; compare
  * runs on the same machine.
  */
@@ -12,6 +15,8 @@ import { performance } from 'node:perf_hooks';
 const VIEW_CLIENTS = 8;
 const VIEW_REQUESTS_PER_CLIENT = 250;
 const SAVES = 200;
+const FAMILY_SIZE = 1000;
+const FAMILY_READS = 100;
 
 function freePort(): Promise<number> {
   return new Promise((resolve) => {
@@ -99,10 +104,48 @@ async function main(): Promise<void> {
     }
     const saveSeconds = (performance.now() - saveStart) / 1000;
 
+    // A family of forks: the public setup is the root; each fork forks a random earlier member.
+    const carId = (
+      (await (await fetch(`${base}/api/setups/${setupId}`, { headers: { Cookie: session.cookie } })).json()) as { setup: { car: { id: number } } }
+    ).setup.car.id;
+    const members = [setupId];
+    const forkLatencies: number[] = [];
+    // A repeatable choice of parent: a linear congruential sequence from a fixed seed.
+    let seed = 12345;
+    const nextIndex = (n: number) => ((seed = (Math.imul(seed, 1103515245) + 12345) >>> 0), seed % n);
+    const forkStart = performance.now();
+    for (let i = 0; i < FAMILY_SIZE; i++) {
+      const parent = members[nextIndex(members.length)];
+      const t0 = performance.now();
+      const res = await fetch(`${base}/api/setups/${parent}/forks`, {
+        method: 'POST',
+        headers: { 'Content-Type': 'application/json', Cookie: session.cookie, 'X-CSRF-Token': session.csrf },
+        body: JSON.stringify({ carId, title: `Bench fork ${i}` }),
+      });
+      const body = (await res.json()) as { setup: { id: number } };
+      if (res.status !== 201) throw new Error(`fork answered ${res.status}`);
+      forkLatencies.push(performance.now() - t0);
+      members.push(body.setup.id);
+    }
+    const forkSeconds = (performance.now() - forkStart) / 1000;
+
+    const familyLatencies: number[] = [];
+    const familyStart = performance.now();
+    for (let i = 0; i < FAMILY_READS; i++) {
+      const t0 = performance.now();
+      const res = await fetch(`${base}/api/setups/${setupId}/family`, { headers: { Cookie: session.cookie } });
+      const body = (await res.json()) as { descendants: unknown[] };
+      if (!res.ok || body.descendants.length !== FAMILY_SIZE) throw new Error(`family answered ${res.status} with ${body.descendants.length} forks`);
+      familyLatencies.push(performance.now() - t0);
+    }
+    const familySeconds = (performance.now() - familyStart) / 1000;
+
     console.log('| route        | reqs  |   req/s | p50 ms  | p95 ms  | p99 ms  |');
     console.log('| ------------ | ----- | ------- | ------- | ------- | ------- |');
     console.log(report('setup view', viewLatencies, viewSeconds));
     console.log(report('setup save', saveLatencies, saveSeconds));
+    console.log(report('fork', forkLatencies, forkSeconds));
+    console.log(report(`family ${FAMILY_SIZE}`, familyLatencies, familySeconds));
   } finally {
     server.kill('SIGTERM');
   }

@@ -16,6 +16,7 @@ import { jsonRateLimit } from './middleware/rateLimit';
 import { adminRouter } from './routes/admin';
 import { authRouter } from './routes/auth';
 import { catalogRouter } from './routes/catalog';
+import { commentsRouter } from './routes/comments';
 import { devRouter } from './routes/dev';
 import { garageRouter } from './routes/garage';
 import { healthRouter } from './routes/health';
@@ -70,6 +71,7 @@ function apiRouter(deps: RouterDeps): Router {
   api.use('/admin', adminRouter(deps));
   api.use('/setups', setupsRouter(deps));
   api.use('/markdown', markdownRouter(deps));
+  api.use('/', commentsRouter(deps));
   api.use('/', garageRouter(deps));
   if (deps.config.nodeEnv !== 'production') api.use('/dev', devRouter(deps));
   api.use('/', catalogRouter(deps));

@@ -55,13 +55,23 @@ describe('forking a setup', () => {
     expect(family.body.ancestors).toEqual([expect.objectContaining({ id: setup.id, visible: false, title: null })]);
   });
 
-  it('refuses to fork a private setup of someone else (404) and across classes (400)', async () => {
+  it('refuses to fork a private setup of someone else (404) and across scales (400)', async () => {
     const { setup: hidden } = await carWithStockSetup(author, stoat8n, { visibility: 'private' });
     expect((await fork(hidden.id, { carId: await racerCar() })).status).toBe(404);
     const { setup } = await carWithStockSetup(author, stoat8n, { visibility: 'public' });
-    const wrongClass = await fork(setup.id, { carId: await racerCar(await kitId(t.db, 'marrowby-wren-10')) });
-    expect(wrongClass.status).toBe(400);
-    expect(wrongClass.body.error.details.carId).toMatch(/same class/);
+    const wrongScale = await fork(setup.id, { carId: await racerCar(await kitId(t.db, 'marrowby-wren-10')) });
+    expect(wrongScale.status).toBe(400);
+    expect(wrongScale.body.error.details.carId).toMatch(/1\/8 nitro buggy.*1\/10 4WD buggy.*same scale/);
+  });
+
+  it('forks onto a car of another class of the same scale, with that class and its sheet', async () => {
+    const { setup } = await carWithStockSetup(author, stoat8n, { visibility: 'public', title: 'Truggy-bound' });
+    const res = await fork(setup.id, { carId: await racerCar(await kitId(t.db, 'cinderfell-gantry-t8')) }).expect(201);
+    expect(res.body.setup).toMatchObject({ vehicleClass: 'truggy-1-8-nitro', title: 'Truggy-bound' });
+    // Both are 1/8 nitro sheets with the same fields, and every buggy value fits the truggy's limits.
+    expect(res.body.setup.currentRevision.values).toEqual(setup.currentRevision.values);
+    const row = await t.db.models.Setup.findByPk(res.body.setup.id);
+    expect(row).toMatchObject({ vehicleClass: 'truggy-1-8-nitro', forkedFromSetupId: setup.id });
   });
 
   it('forks an unlisted setup with its share link only', async () => {

@@ -55,6 +55,16 @@ const EXPECTED: Record<string, Access> = {
   'GET /api/photos/:key': 'public',
   'POST /api/setups/:id/forks': 'signedIn',
   'GET /api/setups/:id/family': 'public',
+  'GET /api/setups/:id/fork-preview': 'signedIn',
+  'GET /api/kits/:id/setups': 'public',
+  'GET /api/setups/:id/upstream': 'signedIn',
+  'POST /api/setups/:id/upstream': 'signedIn',
+  'GET /api/setups/:id/history': 'public',
+  'GET /api/setups/:id/revisions/:number': 'public',
+  'GET /api/setups/:id/comments': 'public',
+  'POST /api/setups/:id/comments': 'signedIn',
+  'PATCH /api/comments/:id': 'signedIn',
+  'DELETE /api/comments/:id': 'signedIn',
   'POST /api/markdown/preview': 'signedIn',
 };
 

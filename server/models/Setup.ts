@@ -1,5 +1,5 @@
 import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type NonAttribute, type Sequelize } from 'sequelize';
-import type { Visibility } from '../../shared/types/setups';
+import type { StoredSetupValues, Visibility } from '../../shared/types/setups';
 import type { TrackTypeKey } from '../../shared/types/trackTypes';
 import type { VehicleClassKey } from '../../shared/types/vehicleClasses';
 import type { Car } from './Car';
@@ -26,6 +26,8 @@ export class Setup extends Model<InferAttributes<Setup>, InferCreationAttributes
   declare familyRootId: CreationOptional<number | null>;
   /** The original's revision this fork last took values from (fork point or last sync). */
   declare upstreamRevisionId: CreationOptional<number | null>;
+  /** Per field, the original's value last taken or dismissed; null until the first sync (the fork point is the base). */
+  declare upstreamBaseValues: CreationOptional<StoredSetupValues | null>;
   declare hiddenAt: CreationOptional<Date | null>;
   declare deletedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
@@ -54,6 +56,7 @@ export class Setup extends Model<InferAttributes<Setup>, InferCreationAttributes
         forkedFromRevisionId: { type: DataTypes.INTEGER, allowNull: true },
         familyRootId: { type: DataTypes.INTEGER, allowNull: true },
         upstreamRevisionId: { type: DataTypes.INTEGER, allowNull: true },
+        upstreamBaseValues: { type: DataTypes.JSONB, allowNull: true },
         hiddenAt: { type: DataTypes.DATE, allowNull: true },
         deletedAt: { type: DataTypes.DATE, allowNull: true },
         createdAt: DataTypes.DATE,

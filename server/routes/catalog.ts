@@ -1,7 +1,7 @@
 import { Router } from 'express';
 import type { RouterDeps } from '../app';
 import { declareRoutes } from '../middleware/access';
-import { getKitStock, listKits, listTracks } from '../services/catalog';
+import { getKitStock, listKitSetups, listKits, listTracks } from '../services/catalog';
 
 export function catalogRouter(deps: RouterDeps): Router {
   const router = Router();
@@ -11,6 +11,9 @@ export function catalogRouter(deps: RouterDeps): Router {
   });
   r.get('/kits/:id/stock', 'public', async (req, res) => {
     res.json({ stock: await getKitStock(deps.db, Number(req.params.id)) });
+  });
+  r.get('/kits/:id/setups', 'public', async (req, res) => {
+    res.json(await listKitSetups(deps.db, Number(req.params.id)));
   });
   r.get('/tracks', 'public', async (_req, res) => {
     res.json({ tracks: await listTracks(deps.db) });

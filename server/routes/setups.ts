@@ -4,7 +4,9 @@ import type { RouterDeps } from '../app';
 import { declareRoutes } from '../middleware/access';
 import { photoUploadMiddleware, requireUploadedPhoto } from '../services/photos';
 import { getFamily } from '../services/family';
-import { forkSetup } from '../services/forks';
+import { forkSetup, previewFork } from '../services/forks';
+import { getHistory, getRevisionDetail } from '../services/history';
+import { applyUpstream, getUpstream } from '../services/upstream';
 import { saveRevision } from '../services/revisions';
 import { addSetupPhoto, removeSetupPhoto } from '../services/setupPhotos';
 import { findViewableSetup } from '../services/setupAccess';
@@ -67,6 +69,27 @@ export function setupsRouter(deps: RouterDeps): Router {
   r.post('/:id/forks', 'signedIn', async (req, res) => {
     const fork = await forkSetup(db, req.user!, Number(req.params.id), req.body);
     res.status(201).json({ setup: await getSetupDetail(db, fork.id, req.user) });
+  });
+
+  r.get('/:id/fork-preview', 'signedIn', async (req, res) => {
+    res.json(await previewFork(db, req.user!, Number(req.params.id), req.query));
+  });
+
+  r.get('/:id/upstream', 'signedIn', async (req, res) => {
+    res.set('Cache-Control', 'private, no-cache').json(await getUpstream(db, req.user!, Number(req.params.id)));
+  });
+
+  r.post('/:id/upstream', 'signedIn', async (req, res) => {
+    const { setupId, taken } = await applyUpstream(db, req.user!, Number(req.params.id), req.body);
+    res.status(taken > 0 ? 201 : 200).json({ setup: await getSetupDetail(db, setupId, req.user), taken });
+  });
+
+  r.get('/:id/history', 'public', async (req, res) => {
+    res.set('Cache-Control', 'private, no-cache').json(await getHistory(db, Number(req.params.id), req.user, shareToken(req)));
+  });
+
+  r.get('/:id/revisions/:number', 'public', async (req, res) => {
+    res.json(await getRevisionDetail(db, Number(req.params.id), Number(req.params.number), req.user, shareToken(req)));
   });
 
   r.get('/:id/family', 'public', async (req, res) => {

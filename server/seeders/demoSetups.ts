@@ -36,6 +36,8 @@ export const DEMO_CARS: DemoCar[] = [
           { changes: { 'diff.centre.oil': 7000 }, note: 'Centre diff 10k → 7k: the front was pulling the car wide on power out of the sweeper.' },
           { changes: { 'shock.rear.oil': 450 }, note: 'Rear shock oil 500 → 450: rear was skipping over the braking bumps into the hairpin.' },
           { changes: { 'susp.rear.toe-block-aft': 3.5 }, note: 'More rear toe (3° → 3.5° rear block): calmer on the long straight, a touch less rotation.' },
+          { changes: { 'chassis.rear-brace': 'stiff' }, note: 'Stiff rear brace (option part): the rear twisted and stepped out over the ruts on exit.' },
+          { changes: { 'body.style': 'high-downforce' }, note: 'High-downforce body (option part): more stable in the air off the tabletop when the wind picks up.' },
         ],
       },
       {

@@ -62,7 +62,12 @@ const KIT_OVERRIDES: Record<string, StoredSetupValues> = {
 /** Option parts of the demo kits: choice options NOT in the box (everything else is). */
 const KIT_OPTION_PARTS: Record<string, Record<string, string[]>> = {
   'ottervale-stoat-8n': { 'chassis.front-brace': ['stiff'], 'chassis.rear-brace': ['stiff'] },
-  'ottervale-stoat-8e': { 'chassis.front-brace': ['stiff'], 'chassis.rear-brace': ['stiff'] },
+  'ottervale-stoat-8e': {
+    'chassis.front-brace': ['stiff'],
+    'chassis.rear-brace': ['stiff'],
+    'susp.front.arm-stiffness': ['hard'],
+    'body.style': ['high-downforce'],
+  },
 };
 
 export type StockSheet = { values: StoredSetupValues; inBox: Record<string, string[]>; templateVersion: number };

@@ -1,4 +1,6 @@
+import { QueryTypes } from 'sequelize';
 import type { KitSummary, TrackSummary } from '../../shared/types/catalog';
+import type { KitSetupList } from '../../shared/types/forks';
 import type { KitStock } from '../../shared/types/setups';
 import { ApiError } from '../errors';
 import type { Database } from '../db/database';
@@ -37,4 +39,30 @@ export async function getKitStock(db: Database, kitId: number): Promise<KitStock
   const kit = Number.isSafeInteger(kitId) ? await db.models.Kit.findByPk(kitId) : null;
   if (!kit) throw ApiError.notFound('That kit');
   return { kitId: kit.id, vehicleClass: kit.vehicleClass, templateVersion: kit.templateVersion, values: kit.stockValues, inBox: kit.stockInBox };
+}
+
+/**
+ * A kit's public setups, newest change first, with how often each was forked: where a newcomer with
+ * that kit starts. Hidden and deleted setups, and those of suspended racers, are left out.
+ */
+export async function listKitSetups(db: Database, kitId: number, limit = 50): Promise<KitSetupList> {
+  const kit = Number.isSafeInteger(kitId) ? await db.models.Kit.findByPk(kitId, { include: [{ model: db.models.Maker, as: 'maker' }] }) : null;
+  if (!kit) throw ApiError.notFound('That kit');
+  const setups = await db.sequelize.query<KitSetupList['setups'][number] & { updatedAt: Date }>(
+    `SELECT s.id, s.title, u.handle AS "ownerHandle", s.revision_count AS "revisionCount", s.track_type AS "trackType",
+            s.updated_at AS "updatedAt",
+            (SELECT count(*)::int FROM setups f WHERE f.forked_from_setup_id = s.id AND f.deleted_at IS NULL AND f.hidden_at IS NULL) AS "forkCount"
+       FROM setups s
+       JOIN cars c ON c.id = s.car_id
+       JOIN users u ON u.id = s.owner_id
+      WHERE c.kit_id = :kitId AND s.visibility = 'public' AND s.deleted_at IS NULL AND s.hidden_at IS NULL
+        AND NOT u.suspended_indefinitely AND (u.suspended_until IS NULL OR u.suspended_until <= now())
+      ORDER BY s.updated_at DESC, s.id DESC
+      LIMIT :limit`,
+    { replacements: { kitId: kit.id, limit }, type: QueryTypes.SELECT },
+  );
+  return {
+    kit: { id: kit.id, name: kit.name, makerName: kit.maker?.name ?? '', vehicleClass: kit.vehicleClass },
+    setups: setups.map((s) => ({ ...s, updatedAt: new Date(s.updatedAt).toISOString() })),
+  };
 }

@@ -1,21 +1,106 @@
 import crypto from 'node:crypto';
 import { z } from 'zod';
+import { applyStockFork, forkCompatible, planStockFork, type StockForkPlan } from '../../shared/compute/setup/stockFork';
+import { forkRequestSchema, type ForkPreview } from '../../shared/types/forks';
+import { getTemplate } from '../../shared/types/templates';
+import { vehicleClassLabel } from '../../shared/types/vehicleClasses';
 import type { Database } from '../db/database';
 import { ApiError } from '../errors';
+import type { Car } from '../models/Car';
 import type { Setup } from '../models/Setup';
+import type { SetupRevision } from '../models/SetupRevision';
 import type { User } from '../models/User';
 import { findOwnCar } from './garage';
 import { findViewableSetup } from './setupAccess';
 import { validatedValues } from './setups';
 
-export const forkRequestSchema = z.object({
-  carId: z.number().int().positive(),
-  title: z.string().trim().min(1).max(120).optional(),
-  /** Fork an older revision of the original; the current one by default. */
-  revisionId: z.number().int().positive().optional(),
-  /** The share token, when forking an unlisted setup from its link. */
-  share: z.string().max(60).optional(),
+/** Ids are PostgreSQL integers: a bigger number can name nothing, and must not reach a query. */
+const MAX_ID = 2_147_483_647;
+
+function queryId(name: string, missing: string) {
+  return z
+    .string({ error: (issue) => (issue.input === undefined ? missing : `Give ${name} once, as a number.`) })
+    .regex(/^\d+$/, { error: `${name} must be a whole number, such as 12.` })
+    .transform(Number)
+    .refine((n) => n >= 1 && n <= MAX_ID, { error: `${name} must be a number from 1 to ${MAX_ID}.` });
+}
+
+/** `GET /api/setups/:id/fork-preview?carId=N[&revisionId=R][&share=T]`: every value arrives as a string. */
+const previewQuerySchema = z.object({
+  carId: queryId('carId', 'Pick the car to fork onto (carId).'),
+  revisionId: queryId('revisionId', 'Pick a revision of the setup (revisionId).').optional(),
+  share: z.string({ error: 'Give the share token once.' }).max(60, 'That share token is too long.').optional(),
 });
+
+type ForkTarget = { carId: number; revisionId?: number; share?: string };
+
+/** Everything a preview shows and a fork is made from; both go through here so they always agree. */
+type PreparedFork = {
+  source: Setup;
+  revision: SetupRevision;
+  ownerHandle: string;
+  sourceKitName: string;
+  car: Car;
+  checkOptionParts: boolean;
+  plan: StockForkPlan;
+};
+
+function refuseOversizedIds(target: ForkTarget): void {
+  const problems: Record<string, string> = {};
+  if (target.carId > MAX_ID) problems.carId = 'Pick one of your cars.';
+  if (target.revisionId !== undefined && target.revisionId > MAX_ID) problems.revisionId = 'That revision is not part of this setup.';
+  if (Object.keys(problems).length) throw ApiError.validation(problems);
+}
+
+async function prepareFork(db: Database, user: User, sourceId: number, target: ForkTarget): Promise<PreparedFork> {
+  const source = await findViewableSetup(db, sourceId, user, target.share);
+  const car = await findOwnCar(db, user.id, target.carId);
+  const kit = car.kit!;
+  if (!forkCompatible(source.vehicleClass, kit.vehicleClass)) {
+    throw ApiError.validation({
+      carId: `This setup is for a ${vehicleClassLabel(source.vehicleClass)} and ${car.nickname} is a ${vehicleClassLabel(kit.vehicleClass)}: a setup can be forked onto a car of the same scale only.`,
+    });
+  }
+  const revision = await db.models.SetupRevision.findOne({ where: { id: target.revisionId ?? source.currentRevisionId!, setupId: source.id } });
+  if (!revision) throw ApiError.validation({ revisionId: 'That revision is not part of this setup.' });
+  const [owner, sourceCar] = await Promise.all([
+    db.models.User.findByPk(source.ownerId),
+    db.models.Car.findByPk(source.carId, { include: [{ model: db.models.Kit, as: 'kit' }] }),
+  ]);
+  const checkOptionParts = car.stock || sourceCar?.kitId !== car.kitId;
+  const plan = planStockFork({
+    sourceClass: source.vehicleClass,
+    sourceValues: revision.values,
+    targetClass: kit.vehicleClass,
+    targetStock: { values: kit.stockValues, inBox: kit.stockInBox },
+    checkOptionParts,
+  });
+  return { source, revision, ownerHandle: owner?.handle ?? 'unknown', sourceKitName: sourceCar?.kit?.name ?? '', car, checkOptionParts, plan };
+}
+
+/**
+ * What forking a setup onto one of my cars would do, before it is done: the option parts it
+ * assumes that my kit does not have in the box, the fields my car's sheet has no place for, and
+ * the fields taken from my kit's stock sheet. `query` is the request's query string.
+ */
+export async function previewFork(db: Database, user: User, sourceId: number, query: unknown): Promise<ForkPreview> {
+  const target = previewQuerySchema.parse(query);
+  const { source, revision, ownerHandle, sourceKitName, car, checkOptionParts, plan } = await prepareFork(db, user, sourceId, target);
+  return {
+    source: {
+      setupId: source.id,
+      revisionId: revision.id,
+      revisionNumber: revision.number,
+      title: source.title,
+      ownerHandle,
+      vehicleClass: source.vehicleClass,
+      kitName: sourceKitName,
+    },
+    target: { carId: car.id, nickname: car.nickname, kitName: car.kit!.name, vehicleClass: car.kit!.vehicleClass, stock: car.stock },
+    checkedOptionParts: checkOptionParts,
+    ...plan,
+  };
+}
 
 /** Called once a fork exists (notifications hook in here later); must not throw. */
 export type ForkListener = (fork: Setup, source: Setup) => void;
@@ -24,31 +109,44 @@ export function onSetupForked(listener: ForkListener): void {
   listeners.push(listener);
 }
 
+/** Labels for a change note: the first few, then how many more, so a note stays readable. */
+function labelList(rows: ReadonlyArray<{ label: string }>, shown = 6): string {
+  const labels = rows.map((row) => row.label);
+  return labels.length <= shown ? labels.join(', ') : `${labels.slice(0, shown).join(', ')} and ${labels.length - shown} more`;
+}
+
+function forkChangeNote(prepared: PreparedFork, stockTaken: StockForkPlan['optionParts']): string {
+  const { source, revision, ownerHandle, car, plan } = prepared;
+  const sentences = [`Forked from “${source.title}” by @${ownerHandle} (revision ${revision.number}).`];
+  if (stockTaken.length) sentences.push(`Stock values instead of option parts: ${labelList(stockTaken)}.`);
+  if (plan.dropped.length) sentences.push(`Left out, not on this car's sheet: ${labelList(plan.dropped)}.`);
+  if (plan.filledFromStock.length) sentences.push(`From the ${car.kit!.name} stock sheet: ${labelList(plan.filledFromStock)}.`);
+  return sentences.join(' ');
+}
+
 /**
  * Copies a setup the racer may see into their garage, in one transaction: a new private setup whose
- * revision 1 holds the chosen revision's values, with where it came from and its family root. A fork
- * is a snapshot: nothing done to the original later changes it.
+ * revision 1 holds the chosen revision's values as fitted to the racer's car (see planStockFork),
+ * with where it came from and its family root. A fork is a snapshot: nothing done to the original
+ * later changes it. Cars of another class are accepted within the same scale.
  */
 export async function forkSetup(db: Database, user: User, sourceId: number, input: unknown): Promise<Setup> {
   const data = forkRequestSchema.parse(input);
-  const source = await findViewableSetup(db, sourceId, user, data.share);
-  const car = await findOwnCar(db, user.id, data.carId);
-  if (car.kit!.vehicleClass !== source.vehicleClass) {
-    throw ApiError.validation({ carId: 'Pick a car of the same class as the setup you are forking.' });
-  }
-  const revisionId = data.revisionId ?? source.currentRevisionId!;
-  const revision = await db.models.SetupRevision.findOne({ where: { id: revisionId, setupId: source.id } });
-  if (!revision) throw ApiError.validation({ revisionId: 'That revision is not part of this setup.' });
-  const { values } = validatedValues(source.vehicleClass, revision.values);
-  const author = await db.models.User.findByPk(source.ownerId);
+  refuseOversizedIds(data);
+  const prepared = await prepareFork(db, user, sourceId, data);
+  const { source, revision, car, plan } = prepared;
+  const vehicleClass = car.kit!.vehicleClass;
+  const forkValues = applyStockFork(plan, revision.values, car.kit!.stockValues, data.stockChoices);
+  const { values } = validatedValues(vehicleClass, forkValues);
+  const stockTaken = plan.optionParts.filter((row) => Object.hasOwn(data.stockChoices, row.key) && data.stockChoices[row.key] === 'stock');
 
   const fork = await db.sequelize.transaction(async (transaction) => {
     const created = await db.models.Setup.create(
       {
         ownerId: user.id,
         carId: car.id,
-        vehicleClass: source.vehicleClass,
-        templateVersion: source.templateVersion,
+        vehicleClass,
+        templateVersion: getTemplate(vehicleClass).version,
         title: data.title ?? source.title,
         visibility: 'private',
         shareToken: crypto.randomBytes(18).toString('base64url'),
@@ -64,13 +162,7 @@ export async function forkSetup(db: Database, user: User, sourceId: number, inpu
       { transaction },
     );
     const first = await db.models.SetupRevision.create(
-      {
-        setupId: created.id,
-        number: 1,
-        values,
-        changeNote: `Forked from “${source.title}” by @${author?.handle ?? 'unknown'} (revision ${revision.number}).`,
-        authorId: user.id,
-      },
+      { setupId: created.id, number: 1, values, changeNote: forkChangeNote(prepared, stockTaken), authorId: user.id },
       { transaction },
     );
     return created.update({ currentRevisionId: first.id, revisionCount: 1 }, { transaction });

@@ -2,10 +2,30 @@ import type { RevisionCreate } from '../../shared/types/setups';
 import { revisionCreateSchema } from '../../shared/types/setups';
 import type { Database } from '../db/database';
 import { ApiError } from '../errors';
+import type { Transaction } from 'sequelize';
+import type { Setup } from '../models/Setup';
 import type { SetupRevision } from '../models/SetupRevision';
 import type { User } from '../models/User';
 import { findOwnSetup } from './setupAccess';
 import { validatedValues } from './setups';
+
+/** The 409 a save from an old base gets, carrying the revision that is now current. */
+export async function staleRevisionError(db: Database, setup: Setup, transaction: Transaction, message: string): Promise<ApiError> {
+  const current = (await db.models.SetupRevision.findByPk(setup.currentRevisionId!, {
+    transaction,
+    include: [{ model: db.models.User, as: 'author', attributes: ['handle'] }],
+  }))!;
+  return new ApiError(409, 'stale_revision', message, {
+    currentRevision: {
+      id: current.id,
+      number: current.number,
+      values: current.values,
+      changeNote: current.changeNote,
+      authorHandle: current.author?.handle ?? '',
+      createdAt: current.createdAt.toISOString(),
+    },
+  });
+}
 
 export type SavedRevision = { revision: SetupRevision; warnings: Record<string, string> };
 
@@ -21,20 +41,7 @@ export async function saveRevision(db: Database, owner: User, setupId: number, i
     const setup = await db.models.Setup.findByPk(found.id, { transaction, lock: transaction.LOCK.UPDATE });
     if (!setup) throw ApiError.notFound('That setup');
     if (setup.currentRevisionId !== data.baseRevisionId) {
-      const current = await db.models.SetupRevision.findByPk(setup.currentRevisionId!, {
-        transaction,
-        include: [{ model: db.models.User, as: 'author', attributes: ['handle'] }],
-      });
-      throw new ApiError(409, 'stale_revision', 'This setup changed since you opened it. Your values are kept; review the differences and save again.', {
-        currentRevision: {
-          id: current!.id,
-          number: current!.number,
-          values: current!.values,
-          changeNote: current!.changeNote,
-          authorHandle: current!.author?.handle ?? '',
-          createdAt: current!.createdAt.toISOString(),
-        },
-      });
+      throw await staleRevisionError(db, setup, transaction, 'This setup changed since you opened it. Your values are kept; review the differences and save again.');
     }
     const created = await db.models.SetupRevision.create(
       { setupId: setup.id, number: setup.revisionCount + 1, values, changeNote: data.changeNote, authorId: owner.id },

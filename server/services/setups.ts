@@ -1,5 +1,6 @@
 import crypto from 'node:crypto';
-import type { SetupCreate, SetupDetail, SetupMetaUpdate, StoredSetupValues } from '../../shared/types/setups';
+import { QueryTypes } from 'sequelize';
+import type { Lineage, SetupCreate, SetupDetail, SetupMetaUpdate, StoredSetupValues } from '../../shared/types/setups';
 import { setupCreateSchema, setupMetaUpdateSchema } from '../../shared/types/setups';
 import { getTemplate, validateSetupValues } from '../../shared/types/templates';
 import { diffSetupValues } from '../../shared/compute/setup/diff';
@@ -62,6 +63,47 @@ export async function createSetup(db: Database, owner: User, input: SetupCreate)
   });
 }
 
+/**
+ * Where a setup came from (withheld when the viewer may no longer see the original), how many forks
+ * it and its family have, and how many comments it carries: one query.
+ */
+async function lineageAndComments(db: Database, setup: Setup, viewer: Viewer): Promise<{ lineage: Lineage; commentCount: number }> {
+  const [row] = await db.sequelize.query<{ forkCount: number; familyForkCount: number; commentCount: number; revisionNumber: number | null; ownerHandle: string | null }>(
+    `SELECT (SELECT count(*)::int FROM setups WHERE forked_from_setup_id = :id AND deleted_at IS NULL AND hidden_at IS NULL) AS "forkCount",
+            (SELECT count(*)::int FROM setups WHERE family_root_id = :root AND deleted_at IS NULL AND hidden_at IS NULL) AS "familyForkCount",
+            (SELECT count(*)::int FROM comments WHERE setup_id = :id AND deleted_at IS NULL AND hidden_at IS NULL) AS "commentCount",
+            (SELECT number FROM setup_revisions WHERE id = :forkedRevision) AS "revisionNumber",
+            (SELECT u.handle FROM setups s JOIN users u ON u.id = s.owner_id WHERE s.id = :forkedFrom) AS "ownerHandle"`,
+    {
+      replacements: { id: setup.id, root: setup.familyRootId ?? setup.id, forkedRevision: setup.forkedFromRevisionId ?? 0, forkedFrom: setup.forkedFromSetupId ?? 0 },
+      type: QueryTypes.SELECT,
+    },
+  );
+  let forkedFrom: Lineage['forkedFrom'] = null;
+  if (setup.forkedFromSetupId) {
+    const original = await db.models.Setup.findByPk(setup.forkedFromSetupId);
+    // The fork's owner opened an unlisted original through its link, so they keep that link; anyone
+    // else sees an unlisted original only if they hold the link themselves (not through the fork).
+    const ownerOfUnlisted =
+      !!original && viewer?.id === setup.ownerId && original.visibility === 'unlisted' && !original.deletedAt && !original.hiddenAt;
+    forkedFrom =
+      original && row.ownerHandle && (ownerOfUnlisted || canView(original, viewer))
+        ? {
+            available: true,
+            setupId: original.id,
+            title: original.title,
+            ownerHandle: row.ownerHandle,
+            revisionNumber: row.revisionNumber ?? 0,
+            share: ownerOfUnlisted ? original.shareToken : null,
+          }
+        : { available: false };
+  }
+  return {
+    lineage: { forkedFrom, forkCount: row.forkCount, familyForkCount: row.familyForkCount },
+    commentCount: row.commentCount,
+  };
+}
+
 /** Everything the setup page shows, for a viewer allowed to see it. */
 export async function getSetupDetail(db: Database, id: number, viewer: Viewer, shareToken?: string): Promise<SetupDetail> {
   const setup = await findViewableSetup(db, id, viewer, shareToken);
@@ -99,6 +141,7 @@ export async function getSetupDetail(db: Database, id: number, viewer: Viewer, s
       changedFieldCount: revisions[i + 1] ? diffSetupValues(revisions[i + 1].values, r.values).length : 0,
     })),
     photos: await listSetupPhotos(db, setup.id),
+    ...(await lineageAndComments(db, setup, viewer)),
     createdAt: setup.createdAt.toISOString(),
     updatedAt: setup.updatedAt.toISOString(),
   };

@@ -21,6 +21,8 @@ export const ERROR_CODES = {
   payloadTooLarge: 'payload_too_large',
   notFound: 'not_found',
   conflict: 'conflict',
+  /** The original setup has a newer revision than the one its changes were chosen from. */
+  upstreamMoved: 'upstream_moved',
   forbidden: 'forbidden',
   unauthenticated: 'unauthenticated',
   rateLimited: 'rate_limited',

@@ -15,11 +15,14 @@ export const STOCK_CHOICES = ['keep', 'stock'] as const;
 export const stockChoiceSchema = z.enum(STOCK_CHOICES);
 export type StockChoice = z.infer<typeof stockChoiceSchema>;
 
+/** Ids are PostgreSQL integers: anything larger is refused here, not by the database. */
+const idSchema = (message: string) => z.number(message).int(message).positive(message).max(2_147_483_647, message);
+
 export const forkRequestSchema = z.object({
-  carId: z.number().int().positive(),
+  carId: idSchema('Pick one of your cars.'),
   title: z.string().trim().min(1, 'Give the fork a title.').max(120, 'Titles are at most 120 characters.').optional(),
   /** Fork an older revision of the original; the current one by default. */
-  revisionId: z.number().int().positive().optional(),
+  revisionId: idSchema('That revision is not part of this setup.').optional(),
   /** The share token, when forking an unlisted setup from its link. */
   share: z.string().max(60).optional(),
   /** Per option-part field: keep the original's value (I will buy the part) or take my kit's stock value. Missing = keep. */

@@ -89,6 +89,31 @@ export const photoSchema = z.object({
 });
 export type Photo = z.infer<typeof photoSchema>;
 
+// ---- Lineage (part of the setup page) ----
+
+export const lineageSchema = z.object({
+  /** null when the setup is not a fork; `available: false` when the original was deleted, hidden or made private. */
+  forkedFrom: z
+    .discriminatedUnion('available', [
+      z.object({
+        available: z.literal(true),
+        setupId: z.number().int(),
+        title: z.string(),
+        ownerHandle: z.string(),
+        revisionNumber: z.number().int(),
+        /** The original's share token, for the fork's owner when the original is unlisted. */
+        share: z.string().nullable(),
+      }),
+      z.object({ available: z.literal(false) }),
+    ])
+    .nullable(),
+  /** Forks of this setup that are not deleted or hidden. */
+  forkCount: z.number().int(),
+  /** Every setup in the family below its root, this one's included when it is a fork. */
+  familyForkCount: z.number().int(),
+});
+export type Lineage = z.infer<typeof lineageSchema>;
+
 export const setupDetailSchema = z.object({
   id: z.number().int(),
   title: z.string(),
@@ -112,6 +137,9 @@ export const setupDetailSchema = z.object({
   }),
   revisions: z.array(revisionSummarySchema),
   photos: z.array(photoSchema),
+  lineage: lineageSchema,
+  /** Comments on the setup and its changes that the viewer can see (deleted ones not counted). */
+  commentCount: z.number().int(),
   createdAt: z.string(),
   updatedAt: z.string(),
 });

@@ -3,6 +3,8 @@ import * as demoWorld from './20261202T0000-catalog-and-racers';
 import * as accounts from './20261202T0100-accounts';
 import * as garage from './20261202T0200-garage-and-setups';
 import * as forks from './20261202T0300-forks';
+import * as upstreamSync from './20261202T0400-upstream-sync';
+import * as comments from './20261202T0500-comments';
 
 export type Migration = {
   name: string;
@@ -16,4 +18,6 @@ export const migrations: Migration[] = [
   { name: '20261202T0100-accounts', ...accounts },
   { name: '20261202T0200-garage-and-setups', ...garage },
   { name: '20261202T0300-forks', ...forks },
+  { name: '20261202T0400-upstream-sync', ...upstreamSync },
+  { name: '20261202T0500-comments', ...comments },
 ];

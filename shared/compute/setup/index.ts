@@ -34,4 +34,25 @@ export {
 export { PLAUSIBLE_RIDE_HEIGHT_MM, checkRideHeightPlausibility, type RangeMm } from './plausibility';
 export { computeSetupSummary, SUMMARY_KEYS, type SetupSummaryFigures, type SummaryFigure } from './summary';
 export { diffSetupValues, type FieldChange } from './diff';
+export {
+  compareSheets,
+  OTHER_SECTION,
+  type ComparedSheet,
+  type CompareRow,
+  type CompareSection,
+  type ComputedRow,
+  type ComputedUnit,
+  type OneSideField,
+  type SheetComparison,
+} from './compare';
 export { applyDiff, applyMerge, threeWayMerge, upstreamChanges, type FieldMerge, type MergeChoice, type MergeStatus } from './merge';
+export {
+  applyStockFork,
+  forkCompatible,
+  planStockFork,
+  type DroppedRow,
+  type FilledFromStockRow,
+  type OptionPartRow,
+  type StockForkInput,
+  type StockForkPlan,
+} from './stockFork';
