@@ -18,6 +18,8 @@ export const setupKeys = {
   all: ['setups'] as const,
   garage: () => [...setupKeys.all, 'garage'] as const,
   detail: (id: number, share?: string) => [...setupKeys.all, 'detail', id, share ?? null] as const,
+  /** A setup's history and single revisions (hooks/history.ts), whichever share token opened them. */
+  history: (id: number) => [...setupKeys.all, 'history', id] as const,
   kitStock: (kitId: number) => ['kits', 'stock', kitId] as const,
 };
 
@@ -89,10 +91,14 @@ export function useUpdateSetupMeta(id: number) {
 
 /** Saves a new revision; a stale base rejects with ApiRequestError code `stale_revision`. */
 export function useSaveRevision(id: number) {
+  const queryClient = useQueryClient();
   const write = useSetupCacheWriter();
   return useMutation({
     mutationFn: (input: RevisionCreate) => apiMutate(`/setups/${id}/revisions`, { body: input, schema: revisionResponseSchema }),
-    onSuccess: (result) => write(result.setup),
+    onSuccess: (result) => {
+      write(result.setup);
+      void queryClient.invalidateQueries({ queryKey: setupKeys.history(id) });
+    },
   });
 }
 

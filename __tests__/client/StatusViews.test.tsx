@@ -1,7 +1,6 @@
 import { fireEvent, render, screen } from '@testing-library/react-native';
 import type { ReactElement } from 'react';
 import { HealthBadge } from '../../components/HealthBadge';
-import { KitList } from '../../components/KitList';
 import { EmptyState, ErrorState } from '../../components/StatusViews';
 import { ThemeProvider } from '../../theme';
 
@@ -40,21 +39,5 @@ describe('ErrorState and EmptyState', () => {
     renderThemed(<EmptyState title="No cars yet" message="Add your first car." actionLabel="Add a car" onAction={onAction} />);
     fireEvent.press(screen.getByRole('button', { name: 'Add a car' }));
     expect(onAction).toHaveBeenCalled();
-  });
-});
-
-describe('KitList', () => {
-  it('shows maker, kit name and class label for each kit', () => {
-    renderThemed(
-      <KitList
-        kits={[
-          { id: 1, slug: 'a', name: 'Stoat 8N', makerName: 'Ottervale Kitworks', vehicleClass: 'buggy-1-8-nitro', releasedYear: 2025 },
-          { id: 2, slug: 'b', name: 'Wren 10', makerName: 'Marrowby Works', vehicleClass: 'buggy-1-10-4wd', releasedYear: null },
-        ]}
-      />,
-    );
-    expect(screen.getByText('Ottervale Kitworks Stoat 8N')).toBeTruthy();
-    expect(screen.getByText('1/8 nitro buggy · 2025')).toBeTruthy();
-    expect(screen.getByText('1/10 4WD buggy')).toBeTruthy();
   });
 });

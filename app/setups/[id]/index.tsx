@@ -1,6 +1,7 @@
 import { router, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { EditorSavedNotice } from '../../../components/EditorSavedNotice';
+import { LineageCard } from '../../../components/LineageCard';
 import { PhotoGallery } from '../../../components/PhotoGallery';
 import { PhotoUploader } from '../../../components/PhotoUploader';
 import { PhotoViewer } from '../../../components/PhotoViewer';
@@ -9,19 +10,22 @@ import { SafetyNote } from '../../../components/SafetyNote';
 import { SetupActions } from '../../../components/SetupActions';
 import { SetupNotes } from '../../../components/SetupNotes';
 import { SetupOverview } from '../../../components/SetupOverview';
+import { SetupComments } from '../../../components/SetupComments';
 import { SetupColumns, SetupPageFrame } from '../../../components/SetupPageFrame';
 import { SetupSheet } from '../../../components/SetupSheet';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/StatusViews';
 import { SummaryCard } from '../../../components/SummaryCard';
+import { SyncBanner } from '../../../components/SyncBanner';
 import { VisibilityControl } from '../../../components/VisibilityControl';
 import { ApiRequestError } from '../../../hooks/api';
+import { signInHref, useMeQuery } from '../../../hooks/auth';
 import { useSavedRevisionNotice } from '../../../hooks/editor';
 import { describeError } from '../../../hooks/form';
+import { useUpstreamQuery } from '../../../hooks/forks';
 import { shareLinkFor, useDisplayUnits, usePhotoUpload } from '../../../hooks/garageUi';
 import { useDeleteSetup, useDeleteSetupPhoto, useSetupQuery, useUpdateSetupMeta } from '../../../hooks/setups';
 import { MAX_PHOTOS_PER_SETUP, type Photo, type SetupDetail } from '../../../shared/types/setups';
 import { useTheme } from '../../../theme';
-
 
 function messageOf(error: unknown): string | null {
   return describeError(error, []).formError;
@@ -70,6 +74,23 @@ function Photos({ setup }: { setup: SetupDetail }) {
   );
 }
 
+/** For the owner of a fork whose original is still there: how many of its changes wait for a look. */
+function UpstreamBanner({ setup }: { setup: SetupDetail }) {
+  const from = setup.lineage.forkedFrom;
+  const enabled = setup.isOwner && from?.available === true;
+  const upstream = useUpstreamQuery(setup.id, enabled);
+  // A failed check only hides the banner: the page itself is what the racer came for.
+  if (!from?.available || !enabled || upstream.data?.status !== 'available') return null;
+  const sinceFork = upstream.data.syncedRevisionNumber === from.revisionNumber;
+  return <SyncBanner setupId={setup.id} count={upstream.data.rows.length} sinceFork={sinceFork} />;
+}
+
+function Lineage({ setup, share }: { setup: SetupDetail; share?: string }) {
+  const me = useMeQuery();
+  const fork = `/setups/${setup.id}/fork${share ? `?share=${encodeURIComponent(share)}` : ''}`;
+  return <LineageCard setup={setup} share={share} signedIn={me.isPending ? undefined : Boolean(me.data)} signInHref={signInHref(fork)} />;
+}
+
 function SetupBody({ setup, share }: { setup: SetupDetail; share?: string }) {
   const { isWide } = useTheme();
   const units = useDisplayUnits();
@@ -90,7 +111,9 @@ function SetupBody({ setup, share }: { setup: SetupDetail; share?: string }) {
   return (
     <>
       {saved.notice ? <EditorSavedNotice notice={saved.notice} onDismiss={saved.dismiss} /> : null}
+      <UpstreamBanner setup={setup} />
       <SetupOverview setup={setup} units={units} />
+      <Lineage setup={setup} share={share} />
       <SetupActions
         setupId={setup.id}
         title={setup.title}
@@ -105,6 +128,7 @@ function SetupBody({ setup, share }: { setup: SetupDetail; share?: string }) {
         left={isWide ? <>{sheet}{notes}</> : <>{summary}{sheet}{notes}</>}
         right={isWide ? <>{summary}{sharing}{rest}{safety}</> : <>{sharing}{safety}{rest}</>}
       />
+      <SetupComments setupId={setup.id} share={share} />
     </>
   );
 }
