@@ -7,9 +7,9 @@ import type { Upstream } from '../../shared/types/forks';
 import type { SetupDetail } from '../../shared/types/setups';
 import { renderWithQueries, stubFetch } from './support/render';
 
-const mockReplace = jest.fn();
+const mockDismissTo = jest.fn();
 jest.mock('expo-router', () => ({
-  router: { replace: (href: string) => mockReplace(href) },
+  router: { replace: jest.fn(), dismissTo: (href: string) => mockDismissTo(href) },
   useLocalSearchParams: () => ({ id: '31' }),
   Link: ({ children }: { children: unknown }) => children,
   Redirect: () => null,
@@ -51,7 +51,7 @@ function serve(upstreams: Upstream[], apply: { status: number; body?: unknown }[
 }
 
 beforeEach(() => {
-  mockReplace.mockReset();
+  mockDismissTo.mockReset();
   rememberCsrfToken('t');
 });
 
@@ -64,7 +64,7 @@ describe('taking the original’s changes', () => {
     const { client } = renderWithQueries(<SyncScreen />);
     fireEvent.press(await screen.findByRole('checkbox', { name: 'Take the original’s Spur gear' }));
     await act(async () => fireEvent.press(screen.getByRole('button', { name: 'Apply 1 change' })));
-    await waitFor(() => expect(mockReplace).toHaveBeenCalledWith('/setups/31'));
+    await waitFor(() => expect(mockDismissTo).toHaveBeenCalledWith('/setups/31'));
     expect(calls.find((c) => c.method === 'POST')?.body).toEqual({ baseRevisionId: 92, theirsRevisionId: 61, take: ['gear.spur'], dismiss: [] });
     expect(client.getQueryData(editorKeys.savedNotice(31))).toEqual({ revisionNumber: 3, warnings: [] });
   });
@@ -87,7 +87,7 @@ describe('taking the original’s changes', () => {
     // Fresh view, fresh choices: nothing is ticked until the racer looks again.
     expect(screen.getByRole('checkbox', { name: 'Take the original’s Spur gear' })).not.toBeChecked();
     expect(calls.filter((c) => c.url.endsWith('/upstream') && c.method === 'GET')).toHaveLength(2);
-    expect(mockReplace).not.toHaveBeenCalled();
+    expect(mockDismissTo).not.toHaveBeenCalled();
   });
 
   it('says the fork is unchanged when the original is gone', async () => {

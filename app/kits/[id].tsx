@@ -50,7 +50,7 @@ function KitBody({ data }: { data: KitSetups }) {
         />
       ) : (
         <>
-          <AppText tone="muted">Newest first. Open one and choose “Start from this setup” to copy it onto your car.</AppText>
+          <AppText tone="muted">Newest first. Open one and choose “Fork this setup” to start from it on your own car.</AppText>
           <KitSetupList setups={setups} />
         </>
       )}

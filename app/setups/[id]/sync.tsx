@@ -38,7 +38,8 @@ function SyncBody({ setup }: { setup: SetupDetail }) {
   const onApplied = (result: { setup: SetupDetail; taken: number }) => {
     // The setup page then says which revision the taken values became.
     if (result.taken > 0) saved.remember({ revisionNumber: result.setup.currentRevision.number, warnings: [] });
-    router.replace(`/setups/${setup.id}`);
+    // Back to the setup page the racer came from (or to a fresh one when sync was opened directly).
+    router.dismissTo(`/setups/${setup.id}`);
   };
   return <SyncContent setup={setup} upstream={upstream} apply={apply} onApplied={onApplied} units={units} notice={stale ? STALE_NOTE : null} />;
 }
@@ -116,7 +117,7 @@ function SyncSetup({ id }: { id: number }) {
     return <ErrorState title="This setup could not load" message={setup.error.message} onRetry={() => void setup.refetch()} />;
   }
   if (!setup.data.isOwner) {
-    return <Outcome title="Only the fork’s owner can take changes" message="Start from this setup yourself to keep your own copy in step with the original." setupId={id} linkLabel="Back to the setup" />;
+    return <Outcome title="Only the fork’s owner can take changes" message="Fork this setup to keep your own copy and take the original’s later changes." setupId={id} linkLabel="Back to the setup" />;
   }
   return <SyncBody setup={setup.data} />;
 }
