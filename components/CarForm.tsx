@@ -12,10 +12,16 @@ import { SetupRadioList } from './SetupRadioList';
 import { TextField } from './TextField';
 
 export type CarFormProps = {
-  kits: KitSummary[];
+  kits: readonly KitSummary[];
   onSubmit: (values: CarCreate) => unknown;
   pending: boolean;
   error: unknown;
+  /** Where the form starts; empty by default. */
+  initial?: Partial<Values>;
+  /** Shown under the name field. */
+  nicknameHint?: string;
+  /** A secondary button beside "Add the car", e.g. to go back to choosing a car. */
+  cancel?: { label: string; onPress: () => void };
 };
 
 // Same rules as the server, with a message for "no kit picked yet" instead of zod's number wording.
@@ -25,8 +31,8 @@ type Values = { kitId: number; nickname: string; stock: boolean };
 const INITIAL: Values = { kitId: 0, nickname: '', stock: false };
 
 /** A new car: which kit it is, what you call it, and whether it is stock. */
-export function CarForm({ kits, onSubmit, pending, error }: CarFormProps) {
-  const form = useForm({ initial: INITIAL, schema, onSubmit, serverError: error, pending });
+export function CarForm({ kits, onSubmit, pending, error, initial, nicknameHint, cancel }: CarFormProps) {
+  const form = useForm({ initial: { ...INITIAL, ...initial }, schema, onSubmit, serverError: error, pending });
   const options = kits.map((kit) => ({
     value: kit.id,
     label: `${kit.makerName} ${kit.name}`,
@@ -45,7 +51,7 @@ export function CarForm({ kits, onSubmit, pending, error }: CarFormProps) {
       />
       <TextField
         label="Name for the car"
-        hint="Whatever you call it in the pits, such as “Blue one” or “Spare”."
+        hint={nicknameHint ?? 'Whatever you call it in the pits, such as “Blue one” or “Spare”.'}
         value={form.values.nickname}
         onChangeText={(text) => form.setField('nickname', text)}
         error={form.fieldErrors.nickname}
@@ -55,11 +61,15 @@ export function CarForm({ kits, onSubmit, pending, error }: CarFormProps) {
         onSubmitEditing={() => void form.submit()}
       />
       <CarStockCheckbox checked={form.values.stock} onChange={(stock) => form.setField('stock', stock)} disabled={pending} />
-      <Button label="Add the car" busy={pending} busyLabel="Adding the car…" onPress={() => void form.submit()} />
+      <View style={styles.buttons}>
+        <Button label="Add the car" busy={pending} busyLabel="Adding the car…" onPress={() => void form.submit()} />
+        {cancel ? <Button label={cancel.label} variant="secondary" onPress={cancel.onPress} disabled={pending} /> : null}
+      </View>
     </View>
   );
 }
 
 const styles = StyleSheet.create({
   form: { gap: space.lg },
+  buttons: { flexDirection: 'row', flexWrap: 'wrap', gap: space.sm },
 });

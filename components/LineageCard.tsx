@@ -25,7 +25,7 @@ function withShare(path: string, share?: string): string {
   return `${path}${path.includes('?') ? '&' : '?'}share=${encodeURIComponent(share)}`;
 }
 
-function ForkedFrom({ lineage }: { lineage: SetupDetail['lineage'] }) {
+function ForkedFrom({ setupId, lineage, share }: { setupId: number; lineage: SetupDetail['lineage']; share?: string }) {
   const from = lineage.forkedFrom;
   if (!from) return null;
   if (!from.available) {
@@ -35,8 +35,13 @@ function ForkedFrom({ lineage }: { lineage: SetupDetail['lineage'] }) {
       </AppText>
     );
   }
+  // Both sides as they are now; each side carries its own share code.
+  const sides = [from.share ? `as=${encodeURIComponent(from.share)}` : '', share ? `bs=${encodeURIComponent(share)}` : ''].filter(Boolean).join('&');
   return (
-    <TextLink href={withShare(`/setups/${from.setupId}`, from.share ?? undefined)} label={`Forked from “${from.title}” by @${from.ownerHandle} (revision ${from.revisionNumber})`} />
+    <View style={styles.row}>
+      <TextLink href={withShare(`/setups/${from.setupId}`, from.share ?? undefined)} label={`Forked from “${from.title}” by @${from.ownerHandle} (revision ${from.revisionNumber})`} />
+      <TextLink href={`/compare?a=${from.setupId}&b=${setupId}${sides ? `&${sides}` : ''}`} label="Compare with the original" />
+    </View>
   );
 }
 
@@ -64,7 +69,7 @@ export function LineageCard({ setup, share, signedIn, signInHref }: LineageCardP
       ) : signedIn === false ? (
         <TextLink href={signInHref} label="Sign in to fork this setup" />
       ) : null}
-      <ForkedFrom lineage={lineage} />
+      <ForkedFrom setupId={setup.id} lineage={lineage} share={share} />
       <View style={styles.row}>
         <AppText>
           {plural(lineage.forkCount, 'fork', 'forks')}

@@ -32,6 +32,7 @@ describe('forks and history on the setup page', () => {
     renderThemed(<LineageCard setup={setupDetail()} share="tok" signedIn signInHref="/sign-in" />);
     expect(hrefOf('Fork this setup')).toBe('/setups/31/fork?share=tok');
     expect(hrefOf('Forked from “Hollow Pines — loose and dusty” by @juno_braithwick (revision 4)')).toBe('/setups/7');
+    expect(hrefOf('Compare with the original')).toBe('/compare?a=7&b=31&bs=tok');
     expect(screen.getByText('0 forks · 3 forks in the whole family')).toBeTruthy();
     expect(hrefOf('See the family')).toBe('/setups/31/family?share=tok');
     expect(hrefOf('History of changes')).toBe('/setups/31/history?share=tok');
@@ -53,6 +54,7 @@ describe('forks and history on the setup page', () => {
     const lineage = { forkedFrom: { available: true as const, setupId: 7, title: 'Quiet one', ownerHandle: 'juno_braithwick', revisionNumber: 2, share: 's3cret' }, forkCount: 0, familyForkCount: 1 };
     renderThemed(<LineageCard setup={setupDetail({ lineage })} signedIn signInHref="/sign-in" />);
     expect(hrefOf('Forked from “Quiet one” by @juno_braithwick (revision 2)')).toBe('/setups/7?share=s3cret');
+    expect(hrefOf('Compare with the original')).toBe('/compare?a=7&b=31&as=s3cret');
   });
 
   it('tells the fork’s owner how many fields the original changed, linking to the review', () => {
