@@ -42,7 +42,9 @@ DATABASE_URL="$TUNEFORK_E2E_DATABASE_URL" ./node_modules/.bin/tsx server/db/cli.
   || die "migrations failed on the e2e database"
 DATABASE_URL="$TUNEFORK_E2E_DATABASE_URL" DATA_DIR="$TUNEFORK_E2E_DATA_DIR" ./node_modules/.bin/tsx server/db/cli.ts seed >/dev/null \
   || die "seeding the e2e database failed"
-if web_export_stale; then build_web; fi
+# Only the browser tests need the exported web app; TUNEFORK_SKIP_WEB_EXPORT=1 skips the build for
+# runs that select other projects (several people can then run tests in one tree at once).
+if [ -z "${TUNEFORK_SKIP_WEB_EXPORT:-}" ] && web_export_stale; then build_web; fi
 
 TYPECHECK=0
 if [ -z "${TUNEFORK_SKIP_TYPECHECK:-}" ]; then
