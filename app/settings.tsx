@@ -1,5 +1,6 @@
 import { router, useLocalSearchParams } from 'expo-router';
 import { EmailChangeForm } from '../components/EmailChangeForm';
+import { EmailPreferencesSection } from '../components/EmailPreferencesSection';
 import { FormErrorBanner } from '../components/FormErrorBanner';
 import { LinkedSignIns } from '../components/LinkedSignIns';
 import { PasswordChangeForm } from '../components/PasswordChangeForm';
@@ -110,12 +111,13 @@ export default function SettingsScreen() {
   const { error } = useLocalSearchParams<{ error?: string }>();
   const me = useMeQuery();
   return (
-    <Screen title="Settings" subtitle="Your public profile, units and how you sign in." back={{ href: '/profile', label: 'Back to Profile' }}>
+    <Screen title="Settings" subtitle="Your public profile, units, e-mail and how you sign in." back={{ href: '/profile', label: 'Back to Profile' }}>
       <SignedInGate me={me} signInHref={signInHref('/settings')}>
         {(signedIn) => (
           <>
             <ProfileAndUnits me={signedIn} />
             <Account me={signedIn} />
+            <EmailPreferencesSection emailConfirmed={signedIn.emailVerified} />
             <SignInMethods me={signedIn} linkError={typeof error === 'string' ? error : null} />
           </>
         )}

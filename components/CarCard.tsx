@@ -32,11 +32,15 @@ export function CarCard({ car }: CarCardProps) {
           ))}
         </View>
       )}
-      <ButtonLink href={`/setups/new?carId=${car.id}`} label="New setup" variant={car.setups.length === 0 ? 'primary' : 'secondary'} />
+      <View style={styles.actions}>
+        <ButtonLink href={`/setups/new?carId=${car.id}`} label="New setup" variant={car.setups.length === 0 ? 'primary' : 'secondary'} />
+        <ButtonLink href={`/track-days?carId=${car.id}`} label="Track days" variant="secondary" />
+      </View>
     </Card>
   );
 }
 
 const styles = StyleSheet.create({
   header: { gap: space.xs, marginBottom: space.xs },
+  actions: { flexDirection: 'row', flexWrap: 'wrap', gap: space.md },
 });

@@ -1,6 +1,6 @@
 import Svg, { Circle, Path, Rect } from 'react-native-svg';
 
-export type NavIconName = 'discover' | 'garage' | 'activity' | 'profile';
+export type NavIconName = 'discover' | 'garage' | 'activity' | 'profile' | 'bell';
 
 export type NavIconProps = { name: NavIconName; color: string; size?: number };
 
@@ -24,6 +24,13 @@ export function NavIcon({ name, color, size = 24 }: NavIconProps) {
         </>
       ) : null}
       {name === 'activity' ? <Path d="M2 13 H6 L9 6 L13 19 L16 11 L18 13 H22" {...stroke} /> : null}
+      {name === 'bell' ? (
+        <>
+          <Path d="M6 16.5 V11 C6 7.5 8.5 5 12 5 C15.5 5 18 7.5 18 11 V16.5 L19.5 18 H4.5 Z" {...stroke} />
+          <Path d="M10 20.5 C10.5 21.3 11.2 21.7 12 21.7 C12.8 21.7 13.5 21.3 14 20.5" {...stroke} />
+          <Path d="M12 3 V5" {...stroke} />
+        </>
+      ) : null}
       {name === 'profile' ? (
         <>
           <Circle cx={12} cy={8.5} r={4} {...stroke} />

@@ -1,9 +1,19 @@
+import { createHmac } from 'node:crypto';
 import path from 'node:path';
 import { z } from 'zod';
 
 const booleanish = z
   .enum(['true', 'false', '1', '0', 'yes', 'no'])
   .transform((v) => v === 'true' || v === '1' || v === 'yes');
+
+function isTimeZone(tz: string): boolean {
+  try {
+    new Intl.DateTimeFormat('en', { timeZone: tz });
+    return true;
+  } catch {
+    return false;
+  }
+}
 
 const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
@@ -43,6 +53,19 @@ const envSchema = z.object({
   S3_SECRET_ACCESS_KEY: z.string().min(1).optional(),
   PHOTO_MAX_BYTES: z.coerce.number().int().min(10_000).default(12 * 1024 * 1024),
   PHOTO_MAX_PIXELS: z.coerce.number().int().min(10_000).default(40_000_000),
+  JOB_WORKERS: booleanish.default(true),
+  JOB_POLL_INTERVAL_SECONDS: z.coerce.number().min(0.5, 'JOB_POLL_INTERVAL_SECONDS must be at least 0.5').max(60).default(2),
+  MAIL_RETRY_LIMIT: z.coerce.number().int().min(0).max(20).default(8),
+  MAIL_RETRY_DELAY_SECONDS: z.coerce.number().int().min(1).max(3600).default(30),
+  DIGEST_CRON: z
+    .string()
+    .regex(/^\S+( \S+){4}$/, 'DIGEST_CRON must be a five-field cron expression such as "0 7 * * *"')
+    .default('0 7 * * *'),
+  DIGEST_TIMEZONE: z
+    .string()
+    .refine(isTimeZone, 'DIGEST_TIMEZONE must be an IANA time zone such as UTC or Europe/Berlin')
+    .default('UTC'),
+  UNSUBSCRIBE_SECRET: z.string().min(32, 'UNSUBSCRIBE_SECRET must be at least 32 characters').optional(),
   /** Development only: the Expo dev server's origin, allowed to call the API with cookies. */
   DEV_WEB_ORIGIN: z.url({ error: 'DEV_WEB_ORIGIN must be a URL such as http://127.0.0.1:8081' }).optional(),
 });
@@ -71,6 +94,16 @@ export type Config = {
     | { driver: 'local'; directory: string }
     | { driver: 's3'; endpoint: string | null; region: string; bucket: string; accessKeyId: string | null; secretAccessKey: string | null };
   photos: { maxBytes: number; maxPixels: number };
+  /** The pg-boss queue: whether this process runs workers, and how often idle workers poll. */
+  jobs: { runWorkers: boolean; pollIntervalSeconds: number };
+  /** Notification e-mail: retries with exponential backoff, the digest's schedule, link signing. */
+  notificationMail: {
+    retryLimit: number;
+    retryDelaySeconds: number;
+    digestCron: string;
+    digestTimezone: string;
+    unsubscribeSecret: string;
+  };
   version: string;
 };
 
@@ -150,6 +183,16 @@ export function loadConfig(env: NodeJS.ProcessEnv = process.env): Config {
     dataDir: path.resolve(e.DATA_DIR),
     storage: storageSettings(e),
     photos: { maxBytes: e.PHOTO_MAX_BYTES, maxPixels: e.PHOTO_MAX_PIXELS },
+    jobs: { runWorkers: e.JOB_WORKERS, pollIntervalSeconds: e.JOB_POLL_INTERVAL_SECONDS },
+    notificationMail: {
+      retryLimit: e.MAIL_RETRY_LIMIT,
+      retryDelaySeconds: e.MAIL_RETRY_DELAY_SECONDS,
+      digestCron: e.DIGEST_CRON,
+      digestTimezone: e.DIGEST_TIMEZONE,
+      // A key of its own, derived when not given, so an unsubscribe signature never doubles as a cookie signature.
+      unsubscribeSecret:
+        e.UNSUBSCRIBE_SECRET ?? createHmac('sha256', e.SESSION_SECRET ?? DEVELOPMENT_SESSION_SECRET).update('tunefork unsubscribe links').digest('hex'),
+    },
     version: process.env.npm_package_version ?? '0.1.0',
   };
 }

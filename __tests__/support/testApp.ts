@@ -8,6 +8,7 @@ import { createApp } from '../../server/app';
 import { loadConfig, type Config } from '../../server/config';
 import { createDatabase, type Database } from '../../server/db/database';
 import type { Logger } from '../../server/logger';
+import { useSharedRateLimits } from '../../server/middleware/rateLimit';
 import { createMailer, type Mailer } from '../../server/services/mail';
 
 /** Config for tests: the test database from scripts/test.sh, overridable per test. */
@@ -52,8 +53,11 @@ export function buildTestApp(overrides: Partial<Config> = {}): TestApp {
   const db = createDatabase(config.databaseUrl);
   const { logger, lines } = memoryLogger();
   const mailer = createMailer(config, db, logger);
+  const app = createApp({ config, db, logger, mailer });
+  // As the server does: rate-limit counters in PostgreSQL.
+  useSharedRateLimits(app, { pool: db.pool, logger });
   return {
-    app: createApp({ config, db, logger, mailer }),
+    app,
     db,
     mailer,
     config,

@@ -4,6 +4,9 @@ import { useSafeAreaInsets } from 'react-native-safe-area-context';
 import { BrandMark } from '../../components/BrandMark';
 import { NavItem } from '../../components/NavItem';
 import type { NavIconName } from '../../components/NavIcon';
+import { NotificationBell } from '../../components/NotificationBell';
+import { useMeQuery } from '../../hooks/auth';
+import { useUnreadCountQuery } from '../../hooks/notifications';
 import { layout, space, useTheme } from '../../theme';
 
 const DESTINATIONS: Array<{ name: string; href: '/' | '/garage' | '/activity' | '/profile'; label: string; icon: NavIconName }> = [
@@ -12,6 +15,13 @@ const DESTINATIONS: Array<{ name: string; href: '/' | '/garage' | '/activity' | 
   { name: 'activity', href: '/activity', label: 'Activity', icon: 'activity' },
   { name: 'profile', href: '/profile', label: 'Profile', icon: 'profile' },
 ];
+
+/** The notifications bell, for signed-in racers only. */
+function Bell({ orientation }: { orientation: 'rail' | 'bar' }) {
+  const signedIn = Boolean(useMeQuery().data);
+  const unread = useUnreadCountQuery(signedIn);
+  return signedIn ? <NotificationBell unreadCount={unread.data ?? null} orientation={orientation} /> : null;
+}
 
 /** Bottom tab bar on phones; the same destinations in a side rail at ≥ 900 px. */
 export default function TabsLayout() {
@@ -41,6 +51,7 @@ export default function TabsLayout() {
           <NavItem label={d.label} icon={d.icon} orientation={orientation} />
         </TabTrigger>
       ))}
+      {isWide ? <Bell orientation="rail" /> : null}
     </View>
   );
   return (
@@ -53,6 +64,7 @@ export default function TabsLayout() {
             style={[styles.topBar, { paddingTop: insets.top + space.sm, backgroundColor: colors.surface, borderColor: colors.border }]}
           >
             <BrandMark />
+            <Bell orientation="bar" />
           </View>
         )}
         <View style={styles.slot}>
@@ -69,6 +81,13 @@ const styles = StyleSheet.create({
   slot: { flex: 1 },
   bar: { flexDirection: 'row', borderTopWidth: 1 },
   rail: { width: layout.railWidth, borderRightWidth: 1, paddingHorizontal: space.md, paddingTop: space.xl, gap: space.xs },
-  topBar: { paddingHorizontal: space.lg, paddingBottom: space.sm, borderBottomWidth: 1 },
+  topBar: {
+    flexDirection: 'row',
+    alignItems: 'center',
+    justifyContent: 'space-between',
+    paddingHorizontal: space.lg,
+    paddingBottom: space.sm,
+    borderBottomWidth: 1,
+  },
   brand: { paddingHorizontal: space.md, paddingBottom: space.xl },
 });

@@ -1,9 +1,50 @@
 import { useLocalSearchParams } from 'expo-router';
+import { useState } from 'react';
+import { FollowCard, type FollowListChoice } from '../../components/FollowCard';
+import { FollowList } from '../../components/FollowList';
 import { RacerProfile } from '../../components/RacerProfile';
 import { Screen } from '../../components/Screen';
 import { EmptyState, ErrorState, LoadingState } from '../../components/StatusViews';
 import { ApiRequestError } from '../../hooks/api';
+import { signInHref, useMeQuery } from '../../hooks/auth';
+import { useFollowListQuery, useFollowStatusQuery, useSetFollowing } from '../../hooks/follows';
 import { useRacerQuery } from '../../hooks/profile';
+
+function Follows({ handle }: { handle: string }) {
+  const me = useMeQuery();
+  const status = useFollowStatusQuery(handle);
+  const setFollowing = useSetFollowing();
+  const [shown, setShown] = useState<FollowListChoice | null>(null);
+  const followers = useFollowListQuery(handle, 'followers', shown === 'followers');
+  const following = useFollowListQuery(handle, 'following', shown === 'following');
+  if (status.isPending) return <LoadingState label="Loading followers…" />;
+  if (status.isError) return <ErrorState title="Followers could not load" message={status.error.message} onRetry={() => void status.refetch()} />;
+  const list = shown === 'followers' ? followers : following;
+  return (
+    <FollowCard
+      status={status.data}
+      busy={setFollowing.isPending}
+      error={setFollowing.error?.message ?? null}
+      onFollowChange={(follow) => setFollowing.mutate({ handle, follow })}
+      signInHref={me.data === null ? signInHref(`/racers/${handle}`) : null}
+      shown={shown}
+      onShow={setShown}
+    >
+      {shown ? (
+        <FollowList
+          title={shown === 'followers' ? 'Followers' : 'Following'}
+          pages={list.data?.pages}
+          loading={list.isPending}
+          error={list.error}
+          hasMore={list.hasNextPage}
+          loadingMore={list.isFetchingNextPage}
+          onMore={() => void list.fetchNextPage()}
+          onRetry={() => void list.refetch()}
+        />
+      ) : null}
+    </FollowCard>
+  );
+}
 
 export default function RacerScreen() {
   const { handle = '' } = useLocalSearchParams<{ handle: string }>();
@@ -31,6 +72,7 @@ export default function RacerScreen() {
   return (
     <Screen title={racer.data.displayName} back={back}>
       <RacerProfile racer={racer.data} />
+      <Follows handle={racer.data.handle} />
     </Screen>
   );
 }

@@ -8,6 +8,8 @@ export class Track extends Model<InferAttributes<Track>, InferCreationAttributes
   declare surface: TrackTypeKey;
   declare indoor: CreationOptional<boolean>;
   declare notes: CreationOptional<string>;
+  /** The racer who added the track; null for seeded tracks. */
+  declare createdBy: CreationOptional<number | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 
@@ -20,6 +22,7 @@ export class Track extends Model<InferAttributes<Track>, InferCreationAttributes
         surface: { type: DataTypes.STRING(40), allowNull: false },
         indoor: { type: DataTypes.BOOLEAN, allowNull: false, defaultValue: false },
         notes: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
+        createdBy: { type: DataTypes.INTEGER, allowNull: true },
         createdAt: DataTypes.DATE,
         updatedAt: DataTypes.DATE,
       },

@@ -10,8 +10,12 @@ import { Setup } from './Setup';
 import { SetupRevision } from './SetupRevision';
 import { Photo } from './Photo';
 import { Comment } from './Comment';
+import { Follow } from './Follow';
+import { Notification } from './Notification';
+import { TrackDay } from './TrackDay';
+import { Run } from './Run';
 
-export { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision, Photo, Comment };
+export { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision, Photo, Comment, Follow, Notification, TrackDay, Run };
 
 export type Models = {
   Maker: typeof Maker;
@@ -25,6 +29,10 @@ export type Models = {
   SetupRevision: typeof SetupRevision;
   Photo: typeof Photo;
   Comment: typeof Comment;
+  Follow: typeof Follow;
+  Notification: typeof Notification;
+  TrackDay: typeof TrackDay;
+  Run: typeof Run;
 };
 
 /** Registers every model on `sequelize` and wires the associations. */
@@ -40,6 +48,10 @@ export function initModels(sequelize: Sequelize): Models {
   SetupRevision.initModel(sequelize);
   Photo.initModel(sequelize);
   Comment.initModel(sequelize);
+  Follow.initModel(sequelize);
+  Notification.initModel(sequelize);
+  TrackDay.initModel(sequelize);
+  Run.initModel(sequelize);
 
   Maker.hasMany(Kit, { foreignKey: 'makerId', as: 'kits' });
   Kit.belongsTo(Maker, { foreignKey: 'makerId', as: 'maker' });
@@ -49,6 +61,12 @@ export function initModels(sequelize: Sequelize): Models {
   SetupRevision.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
   Comment.belongsTo(User, { foreignKey: 'authorId', as: 'author' });
   Comment.belongsTo(SetupRevision, { foreignKey: 'revisionId', as: 'revision' });
+  TrackDay.belongsTo(Track, { foreignKey: 'trackId', as: 'track' });
+  TrackDay.hasMany(Run, { foreignKey: 'trackDayId', as: 'runs' });
+  Run.belongsTo(TrackDay, { foreignKey: 'trackDayId', as: 'trackDay' });
+  Run.belongsTo(Car, { foreignKey: 'carId', as: 'car' });
+  Run.belongsTo(Setup, { foreignKey: 'setupId', as: 'setup' });
+  Run.belongsTo(SetupRevision, { foreignKey: 'revisionId', as: 'revision' });
 
-  return { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision, Photo, Comment };
+  return { Maker, Kit, Track, User, EmailToken, MailboxMessage, Car, Setup, SetupRevision, Photo, Comment, Follow, Notification, TrackDay, Run };
 }

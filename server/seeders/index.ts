@@ -11,6 +11,7 @@ import crypto from 'node:crypto';
 import { validateSetupValues, getTemplate } from '../../shared/types/templates';
 import type { StoredSetupValues } from '../../shared/types/setups';
 import { DEMO_KITS, DEMO_MAKERS, DEMO_RACERS, DEMO_TRACKS } from './demoWorld';
+import { seedDemoTrackDays } from './demoTrackDays';
 
 /** True when nothing a person could have created is in the database yet. */
 export async function isDatabaseEmpty(db: Database): Promise<boolean> {
@@ -67,6 +68,7 @@ export async function seedDemoWorld(db: Database, options: SeedOptions): Promise
       });
     }
     await seedDemoGarages(db, transaction);
+    await seedDemoTrackDays(db, transaction);
   });
   if (options.photos) await seedDemoPhotos(db, options.photos);
 }

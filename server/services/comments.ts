@@ -153,12 +153,20 @@ async function topLevelTarget(db: Database, setup: Setup, input: Target): Promis
   return { revisionId: revision.id, fieldKey: input.fieldKey, parentId: null };
 }
 
+/** Called once a comment is stored (notifications listen here); a listener's failure never fails the comment. */
+export type CommentListener = (db: Database, comment: Comment, setup: Setup) => void | Promise<void>;
+const commentListeners: CommentListener[] = [];
+export function onCommentCreated(listener: CommentListener): void {
+  commentListeners.push(listener);
+}
+
 /** Posts a comment on a setup the racer can see (an unlisted one with its share token in `share`). */
 export async function createComment(db: Database, user: User, setupId: number, input: unknown): Promise<CommentDto> {
   const data = parseInput(commentCreateSchema, input);
   const setup = await findViewableSetup(db, setupId, user, data.share);
   const target = data.parentId !== null ? await replyTarget(db, setup, user, data) : await topLevelTarget(db, setup, data);
   const comment = await db.models.Comment.create({ setupId: setup.id, authorId: user.id, bodyMd: data.bodyMarkdown, ...target });
+  await Promise.allSettled(commentListeners.map(async (listener) => listener(db, comment, setup)));
   return commentDto(db, setup, comment, user);
 }
 

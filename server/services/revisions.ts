@@ -29,6 +29,18 @@ export async function staleRevisionError(db: Database, setup: Setup, transaction
 
 export type SavedRevision = { revision: SetupRevision; warnings: Record<string, string> };
 
+/** Called once a revision is committed (notifications listen here); a listener's failure never fails the save. */
+export type RevisionListener = (db: Database, setup: Setup, revision: SetupRevision) => void | Promise<void>;
+const revisionListeners: RevisionListener[] = [];
+export function onRevisionSaved(listener: RevisionListener): void {
+  revisionListeners.push(listener);
+}
+
+/** Tells the listeners about a committed revision; every path that writes a revision calls it. */
+export async function revisionSaved(db: Database, setup: Setup, revision: SetupRevision): Promise<void> {
+  await Promise.allSettled(revisionListeners.map(async (listener) => listener(db, setup, revision)));
+}
+
 /**
  * Saves the sheet as a new immutable revision. The setup row is locked for the transaction, so two
  * saves from the same base cannot both win: the second gets 409 with the revision that is current.
@@ -50,5 +62,6 @@ export async function saveRevision(db: Database, owner: User, setupId: number, i
     await setup.update({ currentRevisionId: created.id, revisionCount: setup.revisionCount + 1 }, { transaction });
     return created;
   });
+  await revisionSaved(db, found, revision);
   return { revision, warnings };
 }

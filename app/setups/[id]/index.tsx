@@ -15,6 +15,7 @@ import { SetupColumns, SetupPageFrame } from '../../../components/SetupPageFrame
 import { SetupSheet } from '../../../components/SetupSheet';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/StatusViews';
 import { SummaryCard } from '../../../components/SummaryCard';
+import { TextLink } from '../../../components/TextLink';
 import { SyncBanner } from '../../../components/SyncBanner';
 import { VisibilityControl } from '../../../components/VisibilityControl';
 import { ApiRequestError } from '../../../hooks/api';
@@ -97,7 +98,13 @@ function SetupBody({ setup, share }: { setup: SetupDetail; share?: string }) {
   const remove = useDeleteSetup(setup.id);
   const saved = useSavedRevisionNotice(setup.id);
   const values = setup.currentRevision.values;
-  const summary = <SummaryCard vehicleClass={setup.vehicleClass} values={values} units={units} />;
+  const oilsHref = `/setups/${setup.id}/oils${share ? `?share=${encodeURIComponent(share)}` : ''}`;
+  const summary = (
+    <>
+      <SummaryCard vehicleClass={setup.vehicleClass} values={values} units={units} />
+      <TextLink href={oilsHref} label="Oils for today’s temperature" />
+    </>
+  );
   const safety = <SafetyNote vehicleClass={setup.vehicleClass} />;
   const sheet = <SetupSheet vehicleClass={setup.vehicleClass} values={values} units={units} openAll={isWide} />;
   const notes = <SetupNotes notesHtml={setup.notesHtml} editHref={setup.isOwner ? `/setups/${setup.id}/details` : undefined} />;

@@ -5,6 +5,10 @@ import * as garage from './20261202T0200-garage-and-setups';
 import * as forks from './20261202T0300-forks';
 import * as upstreamSync from './20261202T0400-upstream-sync';
 import * as comments from './20261202T0500-comments';
+import * as trackDays from './20261202T0600-track-days';
+import * as follows from './20261202T0700-follows-and-notifications';
+import * as votes from './20261202T0800-votes-and-search';
+import * as mailQueue from './20261202T0900-mail-preferences';
 
 export type Migration = {
   name: string;
@@ -20,4 +24,8 @@ export const migrations: Migration[] = [
   { name: '20261202T0300-forks', ...forks },
   { name: '20261202T0400-upstream-sync', ...upstreamSync },
   { name: '20261202T0500-comments', ...comments },
+  { name: '20261202T0600-track-days', ...trackDays },
+  { name: '20261202T0700-follows-and-notifications', ...follows },
+  { name: '20261202T0800-votes-and-search', ...votes },
+  { name: '20261202T0900-mail-preferences', ...mailQueue },
 ];
