@@ -14,7 +14,7 @@ type Loadable<T> = { data: T[] | undefined; isPending: boolean; error: Error | n
 export type DiscoverCatalogProps = {
   kits: Loadable<KitSummary>;
   tracks: Loadable<TrackSummary>;
-  /** Open at first (wide screens have the room). */
+  /** Open at first; the newcomer's way in (Discover → a kit → its setups) starts here. */
   initiallyOpen?: boolean;
 };
 
@@ -32,8 +32,8 @@ function Section<T>({ title, noun, list, render }: { title: string; noun: string
   );
 }
 
-/** The kits and tracks behind a toggle, below the setups: a kit's page lists its public setups. */
-export function DiscoverCatalog({ kits, tracks, initiallyOpen = false }: DiscoverCatalogProps) {
+/** The kits and tracks below the setups, with a toggle to fold them away: a kit's page lists its public setups. */
+export function DiscoverCatalog({ kits, tracks, initiallyOpen = true }: DiscoverCatalogProps) {
   const [open, setOpen] = useState(initiallyOpen);
   return (
     <View style={styles.group}>

@@ -10,7 +10,7 @@ const SORT_OPTIONS: readonly ChoiceOption<DiscoverSort>[] = [
   { value: 'most-forked', label: 'Most forked' },
   { value: 'best-for', label: 'Best for a track surface' },
 ];
-const SURFACE_OPTIONS: readonly ChoiceOption<TrackTypeKey>[] = TRACK_TYPES.map((t) => ({ value: t.key, label: t.label }));
+const SURFACE_OPTIONS: readonly ChoiceOption<TrackTypeKey>[] = TRACK_TYPES.map((t) => ({ value: t.key, label: t.label, spoken: `Best for ${t.label}` }));
 
 export type DiscoverSortPickerProps = {
   sort: DiscoverSort;

@@ -25,7 +25,7 @@ export function SearchBox({ value, onChange }: SearchBoxProps) {
       maxLength={200}
       accessory={
         value ? (
-          <Pressable role="button" aria-label="Clear the search" onPress={() => onChange('')} style={styles.clear}>
+          <Pressable role="button" aria-label="Empty the search box" onPress={() => onChange('')} style={styles.clear}>
             <AppText tone="muted" aria-hidden>
               ✕
             </AppText>

@@ -60,7 +60,7 @@ export const CONTENT_SECURITY_POLICY = {
 function apiRouter(deps: RouterDeps): Router {
   const api = Router();
   if (deps.config.devWebOrigin) api.use(cors({ origin: deps.config.devWebOrigin, credentials: true }));
-  api.use(jsonRateLimit(deps.config.apiRateLimit));
+  api.use(jsonRateLimit({ ...deps.config.apiRateLimit, name: 'api' }));
   // Before JSON and sessions: photos need neither, and a cacheable image must never carry Set-Cookie.
   api.use('/photos', photosRouter(deps));
   api.use(express.json({ limit: deps.config.jsonBodyLimit }));

@@ -42,6 +42,20 @@ describe('the Activity tab', () => {
     expect(calls.map((c) => c.url).filter((u) => u.includes('/feed'))).toEqual(['/api/feed', '/api/feed?cursor=CURSOR-1']);
   });
 
+  it('checks for new activity on request, from the first page again', async () => {
+    let newest = 'Newer sheet';
+    const { calls } = stubFetch(({ url }) => {
+      if (url.endsWith('/api/me')) return { status: 200, body: { user: rafi } };
+      return { status: 200, body: { items: [setupItem(9, newest)], nextCursor: null } };
+    });
+    renderWithQueries(<ActivityScreen />);
+    expect(await screen.findByRole('link', { name: 'Newer sheet' })).toBeTruthy();
+    newest = 'Brand-new sheet';
+    fireEvent.press(screen.getByRole('button', { name: 'Check for new activity' }));
+    expect(await screen.findByRole('link', { name: 'Brand-new sheet' })).toBeTruthy();
+    expect(calls.filter((c) => c.url === '/api/feed')).toHaveLength(2);
+  });
+
   it('suggests racers to follow when the feed is empty, and follows one', async () => {
     const suggestions: FeedSuggestions = {
       classes: ['buggy-1-8-electric'],

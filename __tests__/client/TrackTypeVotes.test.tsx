@@ -60,7 +60,10 @@ describe('TrackTypeVotes', () => {
     expect(within(dusty).getByRole('button', { name: 'Withdraw my vote on Loose and dusty' })).toBeTruthy();
     for (const { label } of TRACK_TYPES) expect(screen.getByText(label)).toBeTruthy();
     expect(screen.getByLabelText('Loamy: No votes yet')).toBeTruthy();
-    expect(screen.getAllByTestId('bar-works', { includeHiddenElements: true })).toHaveLength(1);
+    const works = screen.getAllByTestId('bar-works', { includeHiddenElements: true });
+    expect(works).toHaveLength(1);
+    // Scale: the largest total on the setup, 11 (9 + 2).
+    expect(Number(works[0].props.width)).toBeCloseTo((9 / 11) * 100, 6);
     expect(screen.getAllByTestId('bar-fails', { includeHiddenElements: true })).toHaveLength(2);
   });
 
@@ -70,7 +73,8 @@ describe('TrackTypeVotes', () => {
       write: () => ({ status: 200, body: { votes: after } }),
     });
     renderWithQueries(<TrackTypeVotes setupId={7} isOwner={false} />);
-    await act(async () => fireEvent.press(await screen.findByRole('radio', { name: "Doesn't work here: Loose and dusty" })));
+    const target = await screen.findByRole('radio', { name: "Doesn't work here: Loose and dusty" });
+    await act(async () => fireEvent.press(target));
     await screen.findByLabelText("Loose and dusty: 8 say it works · 3 say it doesn't");
     const put = calls.find((c) => c.method === 'PUT');
     expect(put?.url).toMatch(/\/api\/setups\/7\/votes\/loose-dusty$/);
@@ -80,7 +84,8 @@ describe('TrackTypeVotes', () => {
   it('withdraws my vote', async () => {
     const { calls } = serve(votes({ turf: { works: 1, myVote: 'works' } }), { write: () => ({ status: 200, body: { votes: votes() } }) });
     renderWithQueries(<TrackTypeVotes setupId={7} isOwner={false} />);
-    await act(async () => fireEvent.press(await screen.findByRole('button', { name: 'Withdraw my vote on Turf' })));
+    const target = await screen.findByRole('button', { name: 'Withdraw my vote on Turf' });
+    await act(async () => fireEvent.press(target));
     await screen.findByLabelText('Turf: No votes yet');
     expect(calls.find((c) => c.method === 'DELETE')?.url).toMatch(/\/api\/setups\/7\/votes\/turf$/);
     expect(screen.queryByRole('button', { name: 'Withdraw my vote on Turf' })).toBeNull();
@@ -91,7 +96,8 @@ describe('TrackTypeVotes', () => {
       write: () => ({ status: 403, body: { error: { code: 'forbidden', message: 'Voting is closed while moderators review this setup.' } } }),
     });
     renderWithQueries(<TrackTypeVotes setupId={7} isOwner={false} />);
-    await act(async () => fireEvent.press(await screen.findByRole('radio', { name: 'Works here: Loamy' })));
+    const target = await screen.findByRole('radio', { name: 'Works here: Loamy' });
+    await act(async () => fireEvent.press(target));
     expect(await screen.findByRole('alert')).toHaveTextContent('Voting is closed while moderators review this setup.');
     expect(screen.getByLabelText("Loamy: 2 say it works · 0 say it doesn't")).toBeTruthy();
   });

@@ -275,7 +275,7 @@ describe('unsubscribe links', () => {
   // Mail programs POST the List-Unsubscribe address with no cookie and no CSRF token (RFC 8058).
   // Skipped until server/auth/csrf.ts exempts POST /api/unsubscribe (the signed token is the proof
   // there, not a session): today the CSRF check answers 403 before the route runs.
-  it.skip('takes the one-click POST a mail program sends to the List-Unsubscribe address (RFC 8058)', async () => {
+  it('takes the one-click POST a mail program sends to the List-Unsubscribe address (RFC 8058)', async () => {
     const r = await createRacer(t.db);
     const token = createUnsubscribeToken(secret(), r.user.id, 'setup-forked');
     const res = await request(t.app)

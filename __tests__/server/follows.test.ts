@@ -254,6 +254,7 @@ describe('suggestions for an empty feed', () => {
     await forkOf(forkers[1], await publicSetup(suspended, 'Suspended', wren2), 'private', wren2);
     await t.db.models.User.update({ suspendedIndefinitely: true }, { where: { id: suspended.id } });
 
+    // Ranking by forks by others, then public setups, then handle (common practice, no source).
     const res = await me.s.agent.get('/api/feed/suggestions').expect(200);
     expect(res.body.classes).toEqual(['buggy-1-10-2wd']);
     expect(res.body.racers).toEqual([

@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { AppText } from '../../components/AppText';
+import { Button } from '../../components/Button';
 import { FeedList } from '../../components/FeedList';
 import { FeedSignedOut } from '../../components/FeedSignedOut';
 import { FeedSuggestions } from '../../components/FeedSuggestions';
@@ -14,13 +15,15 @@ import { space } from '../../theme';
 const TITLE = 'Activity';
 const SUBTITLE = 'What the racers you follow changed, and who forked your setups.';
 
-function Header() {
+/** Title, what the tab is for, and a refresh for keyboards and wide screens (phones can also pull down). */
+function Header({ refreshing, onRefresh }: { refreshing: boolean; onRefresh: () => void }) {
   return (
     <View style={styles.header}>
       <AppText variant="title" aria-level={1}>
         {TITLE}
       </AppText>
       <AppText tone="muted">{SUBTITLE}</AppText>
+      <Button label="Check for new activity" variant="secondary" onPress={onRefresh} busy={refreshing} busyLabel="Checking…" />
     </View>
   );
 }
@@ -58,6 +61,11 @@ function Feed() {
   const feed = useFeedQuery(true);
   const [now, setNow] = useState(Date.now);
   const items = feed.data?.pages.flatMap((page) => page.items) ?? [];
+  const refreshing = feed.isRefetching && !feed.isFetchingNextPage;
+  const refresh = () => {
+    setNow(Date.now());
+    void feed.refetch();
+  };
   let empty = <EmptyFeed />;
   if (feed.isPending) empty = <LoadingState label="Loading your feed…" />;
   else if (feed.isError) empty = <ErrorState title="Your feed could not load" message={feed.error.message} onRetry={() => void feed.refetch()} />;
@@ -66,17 +74,14 @@ function Feed() {
       <FeedList
         items={items}
         now={now}
-        header={<Header />}
+        header={<Header refreshing={refreshing} onRefresh={refresh} />}
         empty={empty}
         hasMore={feed.hasNextPage}
         loadingMore={feed.isFetchingNextPage}
         moreError={feed.isFetchNextPageError ? feed.error.message : null}
         onMore={() => void feed.fetchNextPage()}
-        refreshing={feed.isRefetching && !feed.isFetchingNextPage}
-        onRefresh={() => {
-          setNow(Date.now());
-          void feed.refetch();
-        }}
+        refreshing={refreshing}
+        onRefresh={refresh}
       />
     </View>
   );
@@ -98,5 +103,5 @@ export default function ActivityScreen() {
 
 const styles = StyleSheet.create({
   main: { flex: 1 },
-  header: { gap: space.xs },
+  header: { gap: space.sm },
 });

@@ -57,6 +57,8 @@ export default function DiscoverScreen() {
       const next = { ...prev, [field]: value };
       // A kit of another class cannot be among the class's setups.
       if (field === 'vehicleClass' && value !== 'any' && kits.data?.find((k) => String(k.id) === prev.kitId)?.vehicleClass !== value) next.kitId = 'any';
+      // "Best for" starts from the surface already filtered on: that is the track the racer has in mind.
+      if (field === 'sort' && value === 'best-for' && prev.trackType !== 'any') next.bestFor = prev.trackType as DiscoverDraft['bestFor'];
       return next;
     });
   const pickKit = (kit: KitSuggestion) => {
@@ -104,7 +106,14 @@ export default function DiscoverScreen() {
   if (results.isPending) empty = <LoadingState label={searching ? 'Searching…' : 'Finding setups…'} />;
   else if (results.isError) empty = <ErrorState title="Setups could not load" message={results.error.message} onRetry={() => void results.refetch()} />;
   else if (searching)
-    empty = <EmptyState title={`Nothing matches “${words}”`} message="Try fewer or other words, or check the spelling." actionLabel="Clear the search" onAction={() => setText('')} />;
+    empty = (
+      <EmptyState
+        title={`Nothing matches “${words}”`}
+        message={`Try fewer or other words, or check the spelling${search.data?.pages[0]?.kitSuggestions.length ? ', or pick a kit above' : ''}.`}
+        actionLabel="Clear the search"
+        onAction={() => setText('')}
+      />
+    );
   else if (filterCount > 0)
     empty = <EmptyState title="No setups match these filters" message="Widen the temperature range, or pick another kit or surface." actionLabel="Clear filters" onAction={clearFilters} />;
   else empty = <EmptyState title="No public setups yet" message="Setups racers make public appear here. Publish one of yours from your garage." />;
@@ -116,7 +125,7 @@ export default function DiscoverScreen() {
         units={units}
         header={header}
         empty={empty}
-        footer={<DiscoverCatalog kits={{ ...kits, refetch: () => void kits.refetch() }} tracks={{ ...tracks, refetch: () => void tracks.refetch() }} initiallyOpen={isWide} />}
+        footer={<DiscoverCatalog kits={{ ...kits, refetch: () => void kits.refetch() }} tracks={{ ...tracks, refetch: () => void tracks.refetch() }} />}
         hasMore={results.hasNextPage}
         loadingMore={results.isFetchingNextPage}
         moreError={results.isFetchNextPageError ? results.error.message : null}

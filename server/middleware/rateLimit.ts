@@ -45,7 +45,8 @@ export class PostgresRateLimitStore implements Store {
   init(options: Options): void {
     this.windowMs = options.windowMs;
     const limit = typeof options.limit === 'number' ? options.limit : 'dynamic';
-    this.prefix = `${this.name ?? `${options.windowMs}/${limit}`}:`;
+    // The window and limit are part of the key, so a limiter whose numbers change starts afresh.
+    this.prefix = `${this.name ? `${this.name}:` : ''}${options.windowMs}/${limit}:`;
   }
 
   async increment(key: string): Promise<ClientRateLimitInfo> {

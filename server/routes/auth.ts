@@ -34,7 +34,7 @@ async function signedInResponse(req: Request, res: Response, user: Express.User,
 export function authRouter(deps: RouterDeps): Router {
   const router = Router();
   const r = declareRoutes(router, deps.routes, '/auth');
-  const limit = jsonRateLimit(deps.config.authRateLimit);
+  const limit = jsonRateLimit({ ...deps.config.authRateLimit, name: 'auth' });
 
   r.get('/csrf', 'public', (req, res) => {
     res.set('Cache-Control', 'no-store').json({ csrfToken: csrf.generateToken(req) });

@@ -10,9 +10,10 @@ const shareToken = (req: Request) => (typeof req.query.share === 'string' ? req.
  * Posting limit per racer account, not per address: racers at one track share an address, and one
  * account must not flood a thread from many. Runs after the sign-in check, so `req.user` is set.
  */
-function perRacerLimit(options: { max: number; windowMs: number }): RequestHandler {
+function perRacerLimit(name: string, options: { max: number; windowMs: number }): RequestHandler {
   return jsonRateLimit({
     ...options,
+    name,
     keyGenerator: (req) => `racer:${req.user!.id}`,
     message: (seconds) => `You are posting comments too fast. Try again in ${seconds} s.`,
   });
@@ -23,7 +24,7 @@ export function commentsRouter(deps: RouterDeps): Router {
   const r = declareRoutes(router, deps.routes, '/');
   const { db } = deps;
   const { burst, sustained } = deps.config.commentRateLimit;
-  const postingLimits = [perRacerLimit(burst), perRacerLimit(sustained)];
+  const postingLimits = [perRacerLimit('comments-burst', burst), perRacerLimit('comments-sustained', sustained)];
 
   r.get('/setups/:id/comments', 'public', async (req, res) => {
     const comments = await listComments(db, Number(req.params.id), req.user, shareToken(req));

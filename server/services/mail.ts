@@ -4,7 +4,14 @@ import type { Database } from '../db/database';
 import type { Logger } from '../logger';
 import { startFakeSmtp, type FakeSmtp } from './fakeSmtp';
 
-export type OutgoingMail = { to: string; subject: string; text: string; html: string };
+export type OutgoingMail = {
+  to: string;
+  subject: string;
+  text: string;
+  html: string;
+  /** Extra headers, such as List-Unsubscribe on notification mail. */
+  headers?: Record<string, string>;
+};
 
 export type Mailer = {
   /** Sends and resolves once the SMTP server accepted the message. */

@@ -11,7 +11,7 @@ import type { SetupRevision } from '../models/SetupRevision';
 import type { User } from '../models/User';
 import { findOwnSetup } from './setupAccess';
 import { validatedValues } from './setups';
-import { staleRevisionError } from './revisions';
+import { revisionSaved, staleRevisionError } from './revisions';
 
 type Original = { setup: Setup; ownerHandle: string };
 type SyncState = { theirs: SetupRevision; mine: SetupRevision; syncedNumber: number; base: StoredSetupValues; rows: FieldMerge[]; offered: FieldMerge[] };
@@ -194,7 +194,7 @@ export async function applyUpstream(db: Database, user: User, setupId: number, i
   if (both.length) {
     throw ApiError.validation({ dismiss: `${fieldNames(places, both)} cannot be both taken and dismissed; choose one.` }, 'Choose to take or to dismiss each change, not both.');
   }
-  return db.sequelize.transaction(async (transaction) => {
+  const result = await db.sequelize.transaction(async (transaction) => {
     const fork = await db.models.Setup.findByPk(found.id, { transaction, lock: transaction.LOCK.UPDATE });
     if (!fork || fork.deletedAt) throw ApiError.notFound('That setup');
     if (!fork.forkedFromSetupId) throw ApiError.validation({ setupId: 'This setup is not a fork: there is no original to take changes from.' });
@@ -228,6 +228,12 @@ export async function applyUpstream(db: Database, user: User, setupId: number, i
       Object.assign(update, { currentRevisionId: revision.id, revisionCount: fork.revisionCount + 1 });
     }
     await fork.update(update, { transaction });
-    return { setupId: fork.id, taken: take.length };
+    return { fork, revision: take.length ? (update.currentRevisionId ?? null) : null, taken: take.length };
   });
+  // Forks of this fork hear about the new revision like any other save, once it is committed.
+  if (result.revision !== null) {
+    const revision = await db.models.SetupRevision.findByPk(result.revision);
+    if (revision) await revisionSaved(db, result.fork, revision);
+  }
+  return { setupId: result.fork.id, taken: result.taken };
 }

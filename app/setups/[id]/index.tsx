@@ -16,6 +16,7 @@ import { SetupSheet } from '../../../components/SetupSheet';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/StatusViews';
 import { SummaryCard } from '../../../components/SummaryCard';
 import { TextLink } from '../../../components/TextLink';
+import { TrackTypeVotes } from '../../../components/TrackTypeVotes';
 import { SyncBanner } from '../../../components/SyncBanner';
 import { VisibilityControl } from '../../../components/VisibilityControl';
 import { ApiRequestError } from '../../../hooks/api';
@@ -121,6 +122,7 @@ function SetupBody({ setup, share }: { setup: SetupDetail; share?: string }) {
       <UpstreamBanner setup={setup} />
       <SetupOverview setup={setup} units={units} />
       <Lineage setup={setup} share={share} />
+      {setup.visibility === 'public' ? <TrackTypeVotes setupId={setup.id} isOwner={setup.isOwner} share={share} /> : null}
       <SetupActions
         setupId={setup.id}
         title={setup.title}

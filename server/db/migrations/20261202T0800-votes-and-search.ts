@@ -205,6 +205,10 @@ export async function down({ sequelize }: MigrationContext): Promise<void> {
   await run('DROP FUNCTION IF EXISTS setups_set_search_context()');
   await run('DROP FUNCTION IF EXISTS setup_search_context(integer, integer)');
   await run('DROP FUNCTION IF EXISTS setups_maintain_fork_count()');
+  // Indexes on columns that stay (created_at, id) would outlive the columns dropped below.
+  await run('DROP INDEX IF EXISTS setups_listed_created_idx');
+  await run('DROP INDEX IF EXISTS setups_listed_forks_idx');
+  await run('DROP INDEX IF EXISTS setups_search_idx');
   await run('ALTER TABLE setups DROP COLUMN IF EXISTS search_document');
   await run('ALTER TABLE setups DROP COLUMN IF EXISTS search_context');
   await run('ALTER TABLE setups DROP COLUMN IF EXISTS fork_count');
