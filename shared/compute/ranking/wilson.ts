@@ -26,12 +26,13 @@ export function wilsonLowerBound(works: number, fails: number, z: number = WILSO
   requireCount(fails, 'fails');
   if (!Number.isFinite(z) || z <= 0) throw new RangeError(`z must be a positive number; got ${String(z)}`);
   const n = works + fails;
-  if (n === 0) return 0;
+  // With no "works" vote the bound is exactly 0 (centre and margin are equal); computing it would
+  // leave rounding dust of either sign, which could order 0-for-10 above 0-for-5.
+  if (n === 0 || works === 0) return 0;
   const share = works / n;
   const z2 = z * z;
   const centre = share + z2 / (2 * n);
   const margin = z * Math.sqrt((share * (1 - share) + z2 / (4 * n)) / n);
-  // Rounding can leave a hair below 0 when works is 0; the bound of a share is never negative.
   return Math.max(0, (centre - margin) / (1 + z2 / n));
 }
 
