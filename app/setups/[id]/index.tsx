@@ -12,20 +12,19 @@ import { SetupNotes } from '../../../components/SetupNotes';
 import { SetupOverview } from '../../../components/SetupOverview';
 import { SetupComments } from '../../../components/SetupComments';
 import { SetupColumns, SetupPageFrame } from '../../../components/SetupPageFrame';
+import { SetupQueryGate } from '../../../components/SetupQueryGate';
 import { SetupSheet } from '../../../components/SetupSheet';
-import { EmptyState, ErrorState, LoadingState } from '../../../components/StatusViews';
 import { SummaryCard } from '../../../components/SummaryCard';
 import { TextLink } from '../../../components/TextLink';
 import { TrackTypeVotes } from '../../../components/TrackTypeVotes';
 import { SyncBanner } from '../../../components/SyncBanner';
 import { VisibilityControl } from '../../../components/VisibilityControl';
-import { ApiRequestError } from '../../../hooks/api';
 import { signInHref, useMeQuery } from '../../../hooks/auth';
 import { useSavedRevisionNotice } from '../../../hooks/editor';
 import { describeError } from '../../../hooks/form';
 import { useUpstreamQuery } from '../../../hooks/forks';
 import { shareLinkFor, useDisplayUnits, usePhotoUpload } from '../../../hooks/garageUi';
-import { useDeleteSetup, useDeleteSetupPhoto, useSetupQuery, useUpdateSetupMeta } from '../../../hooks/setups';
+import { useDeleteSetup, useDeleteSetupPhoto, useUpdateSetupMeta } from '../../../hooks/setups';
 import { MAX_PHOTOS_PER_SETUP, type Photo, type SetupDetail } from '../../../shared/types/setups';
 import { useTheme } from '../../../theme';
 
@@ -144,39 +143,16 @@ function SetupBody({ setup, share }: { setup: SetupDetail; share?: string }) {
 
 export default function SetupScreen() {
   const params = useLocalSearchParams<{ id: string; share?: string }>();
-  const id = Number(params.id);
   const share = typeof params.share === 'string' && params.share ? params.share : undefined;
-  const setup = useSetupQuery(id, share);
-  const back = setup.data?.isOwner ? { href: '/garage', label: 'Back to Garage' } : { href: '/', label: 'Back to Discover' };
-  if (!Number.isSafeInteger(id) || id <= 0 || (setup.isError && setup.error instanceof ApiRequestError && setup.error.status === 404)) {
-    return (
-      <SetupPageFrame title="Setup not found" back={back}>
-        <EmptyState
-          title="No setup at this address"
-          message="It may be private, deleted, or the link is missing the part after “share=”. Ask whoever sent it for the full link."
-          actionLabel="Find setups on Discover"
-          onAction={() => router.replace('/')}
-        />
-      </SetupPageFrame>
-    );
-  }
-  if (setup.isPending) {
-    return (
-      <SetupPageFrame title="Setup" back={back}>
-        <LoadingState label="Loading the setup…" />
-      </SetupPageFrame>
-    );
-  }
-  if (setup.isError) {
-    return (
-      <SetupPageFrame title="Setup" back={back}>
-        <ErrorState title="This setup could not load" message={setup.error.message} onRetry={() => void setup.refetch()} />
-      </SetupPageFrame>
-    );
-  }
+  const back = (setup: SetupDetail | undefined) =>
+    setup?.isOwner ? { href: '/garage', label: 'Back to Garage' } : { href: '/', label: 'Back to Discover' };
   return (
-    <SetupPageFrame title={setup.data.title} back={back}>
-      <SetupBody setup={setup.data} share={share} />
-    </SetupPageFrame>
+    <SetupQueryGate id={Number(params.id)} share={share} titles={{ notFound: 'Setup not found', pending: 'Setup' }} back={back}>
+      {(setup) => (
+        <SetupPageFrame title={setup.title} back={back(setup)}>
+          <SetupBody setup={setup} share={share} />
+        </SetupPageFrame>
+      )}
+    </SetupQueryGate>
   );
 }
