@@ -21,6 +21,8 @@ import { trackDaysRouter } from './routes/trackDays';
 import { followsRouter } from './routes/follows';
 import { votesRouter } from './routes/votes';
 import { mailPrefsRouter } from './routes/mailPrefs';
+import { reportsRouter } from './routes/reports';
+import { moderationRouter } from './routes/moderation';
 import { devRouter } from './routes/dev';
 import { garageRouter } from './routes/garage';
 import { healthRouter } from './routes/health';
@@ -80,6 +82,8 @@ function apiRouter(deps: RouterDeps): Router {
   api.use('/', followsRouter(deps));
   api.use('/', votesRouter(deps));
   api.use('/', mailPrefsRouter(deps));
+  api.use('/', reportsRouter(deps));
+  api.use('/', moderationRouter(deps));
   api.use('/', garageRouter(deps));
   if (deps.config.nodeEnv !== 'production') api.use('/dev', devRouter(deps));
   api.use('/', catalogRouter(deps));

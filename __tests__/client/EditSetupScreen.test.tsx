@@ -31,7 +31,7 @@ function setupDetail(overrides: Partial<SetupDetail> = {}): SetupDetail {
     vehicleClass: 'buggy-1-8-electric', templateVersion: 1,
     conditions: { trackType: 'loose-dusty', temperatureC: 24, grip: 'low' }, notesMarkdown: '', notesHtml: '',
     currentRevision: { id: 44, number: 4, values: baseValues, changeNote: 'Rear oil down.', createdAt: '2026-11-29T10:00:00.000Z' },
-    revisions: [], photos: [], lineage: { forkedFrom: null, forkCount: 0, familyForkCount: 0 }, commentCount: 0, createdAt: '2026-11-01T10:00:00.000Z', updatedAt: '2026-11-29T10:00:00.000Z',
+    revisions: [], photos: [], lineage: { forkedFrom: null, forkCount: 0, familyForkCount: 0 }, commentCount: 0, hidden: null, createdAt: '2026-11-01T10:00:00.000Z', updatedAt: '2026-11-29T10:00:00.000Z',
     ...overrides,
   };
 }

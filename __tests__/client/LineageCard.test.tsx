@@ -20,7 +20,7 @@ function setupDetail(overrides: Partial<SetupDetail> = {}): SetupDetail {
     currentRevision: { id: 90, number: 3, values: {}, changeNote: 'Softer front.', createdAt: '2026-12-01T10:00:00.000Z' },
     revisions: [], photos: [],
     lineage: { forkedFrom: { available: true, setupId: 7, title: 'Hollow Pines — loose and dusty', ownerHandle: 'juno_braithwick', revisionNumber: 4, share: null }, forkCount: 0, familyForkCount: 3 },
-    commentCount: 2, createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
+    commentCount: 2, hidden: null, createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
     ...overrides,
   };
 }

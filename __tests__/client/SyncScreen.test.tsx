@@ -31,7 +31,7 @@ function fork(revision: number): SetupDetail {
     currentRevision: { id: 90 + revision, number: revision, values: {}, changeNote: 'x', createdAt: '2026-12-01T10:00:00.000Z' },
     revisions: [], photos: [],
     lineage: { forkedFrom: { available: true, setupId: 7, title: 'Hollow Pines — loose and dusty', ownerHandle: 'juno_braithwick', revisionNumber: 4, share: null }, forkCount: 0, familyForkCount: 1 },
-    commentCount: 0, createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
+    commentCount: 0, hidden: null, createdAt: '2026-11-30T10:00:00.000Z', updatedAt: '2026-12-01T10:00:00.000Z',
   };
 }
 

@@ -1,6 +1,7 @@
 import crypto from 'node:crypto';
 import { QueryTypes } from 'sequelize';
 import type { Lineage, SetupCreate, SetupDetail, SetupMetaUpdate, StoredSetupValues } from '../../shared/types/setups';
+import type { HiddenNotice } from '../../shared/types/moderation';
 import { setupCreateSchema, setupMetaUpdateSchema } from '../../shared/types/setups';
 import { getTemplate, validateSetupValues } from '../../shared/types/templates';
 import { diffSetupValues } from '../../shared/compute/setup/diff';
@@ -104,6 +105,22 @@ async function lineageAndComments(db: Database, setup: Setup, viewer: Viewer): P
   };
 }
 
+/** Moderators' hides on a setup and on its revisions' change notes: one query. */
+async function moderationHidesOf(db: Database, setupId: number): Promise<{ setup: HiddenNotice | null; revisionIds: Set<number> }> {
+  const rows = await db.sequelize.query<{ targetType: string; targetId: number; hiddenAt: Date; reason: string; auto: boolean; actionId: number | null }>(
+    `SELECT h.target_type AS "targetType", h.target_id AS "targetId", h.hidden_at AS "hiddenAt", h.reason, h.auto, h.action_id AS "actionId"
+       FROM content_hides h
+      WHERE (h.target_type = 'setup' AND h.target_id = :id)
+         OR (h.target_type = 'revision' AND h.target_id IN (SELECT r.id FROM setup_revisions r WHERE r.setup_id = :id))`,
+    { replacements: { id: setupId }, type: QueryTypes.SELECT },
+  );
+  const own = rows.find((r) => r.targetType === 'setup');
+  return {
+    setup: own ? { hiddenAt: own.hiddenAt.toISOString(), reason: own.reason, autoHidden: own.auto, actionId: own.actionId } : null,
+    revisionIds: new Set(rows.filter((r) => r.targetType === 'revision').map((r) => r.targetId)),
+  };
+}
+
 /** Everything the setup page shows, for a viewer allowed to see it. */
 export async function getSetupDetail(db: Database, id: number, viewer: Viewer, shareToken?: string): Promise<SetupDetail> {
   const setup = await findViewableSetup(db, id, viewer, shareToken);
@@ -118,6 +135,8 @@ export async function getSetupDetail(db: Database, id: number, viewer: Viewer, s
   ]);
   const current = revisions.find((r) => r.id === setup.currentRevisionId)!;
   const isOwner = viewer?.id === setup.ownerId;
+  const hides = await moderationHidesOf(db, setup.id);
+  const seesHidden = isOwner || viewer?.role === 'moderator' || viewer?.role === 'admin';
   return {
     id: setup.id,
     title: setup.title,
@@ -135,13 +154,15 @@ export async function getSetupDetail(db: Database, id: number, viewer: Viewer, s
     revisions: revisions.map((r, i) => ({
       id: r.id,
       number: r.number,
-      changeNote: r.changeNote,
+      changeNote: hides.revisionIds.has(r.id) && !(seesHidden || viewer?.id === r.authorId) ? '' : r.changeNote,
+      noteHidden: hides.revisionIds.has(r.id),
       authorHandle: r.author?.handle ?? '',
       createdAt: r.createdAt.toISOString(),
       changedFieldCount: revisions[i + 1] ? diffSetupValues(revisions[i + 1].values, r.values).length : 0,
     })),
     photos: await listSetupPhotos(db, setup.id),
     ...(await lineageAndComments(db, setup, viewer)),
+    hidden: hides.setup,
     createdAt: setup.createdAt.toISOString(),
     updatedAt: setup.updatedAt.toISOString(),
   };

@@ -1,6 +1,7 @@
 import { trackTypeKeySchema } from './trackTypes';
 import { vehicleClassKeySchema } from './vehicleClasses';
 import { z } from './zod';
+import { hiddenNoticeSchema } from './moderation';
 
 export const VISIBILITIES = ['private', 'unlisted', 'public'] as const;
 export const visibilitySchema = z.enum(VISIBILITIES);
@@ -73,6 +74,8 @@ export const revisionSummarySchema = z.object({
   createdAt: z.string(),
   /** How many fields differ from the revision before (0 for the first). */
   changedFieldCount: z.number().int(),
+  /** Moderators hid this change note; `changeNote` is empty unless the viewer is its author or a moderator. */
+  noteHidden: z.boolean(),
 });
 export type RevisionSummary = z.infer<typeof revisionSummarySchema>;
 
@@ -140,6 +143,8 @@ export const setupDetailSchema = z.object({
   lineage: lineageSchema,
   /** Comments on the setup and its changes that the viewer can see (deleted ones not counted). */
   commentCount: z.number().int(),
+  /** Set when moderators hid the setup (only its owner and moderators can then open it): why, and how to appeal. */
+  hidden: hiddenNoticeSchema.nullable(),
   createdAt: z.string(),
   updatedAt: z.string(),
 });

@@ -9,6 +9,7 @@ import * as trackDays from './20261202T0600-track-days';
 import * as follows from './20261202T0700-follows-and-notifications';
 import * as votes from './20261202T0800-votes-and-search';
 import * as mailQueue from './20261202T0900-mail-preferences';
+import * as moderation from './20261202T1000-moderation';
 
 export type Migration = {
   name: string;
@@ -28,4 +29,5 @@ export const migrations: Migration[] = [
   { name: '20261202T0700-follows-and-notifications', ...follows },
   { name: '20261202T0800-votes-and-search', ...votes },
   { name: '20261202T0900-mail-preferences', ...mailQueue },
+  { name: '20261202T1000-moderation', ...moderation },
 ];
