@@ -58,4 +58,34 @@ describe('the PostgreSQL rate-limit store', () => {
     await api.resetKey('198.51.100.9');
     expect(await api.get('198.51.100.9')).toBeUndefined();
   });
+
+  it('far below the limit counts hits in memory and writes them together; near it, every hit at once', async () => {
+    const key = '198.51.100.10';
+    const one = store(t.db.pool, 60_000, 100);
+    const two = store(otherPool, 60_000, 100);
+    const stored = async () =>
+      (await t.db.pool.query<{ hits: number }>('SELECT hits FROM rate_limit_hits WHERE key = $1', [`60000/100:${key}`])).rows[0]?.hits ?? 0;
+    // The first hit of a key is always written: the server has no view of the count yet.
+    expect((await one.increment(key)).totalHits).toBe(1);
+    expect(await stored()).toBe(1);
+    // The next ones, well under half the limit, wait in memory…
+    for (let i = 2; i <= 10; i++) expect((await one.increment(key)).totalHits).toBe(i);
+    expect(await stored()).toBe(1);
+    // …until the flush writes them in one statement.
+    await one.flush();
+    expect(await stored()).toBe(10);
+    // A second server's first hit reads the shared total.
+    expect((await two.increment(key)).totalHits).toBe(11);
+    // Reading a count never misses this server's waiting hits.
+    await one.increment(key);
+    expect((await one.get(key))?.totalHits).toBe(12);
+    // Other servers' hits reach this one's view within the sync interval (200 ms)…
+    await t.db.pool.query('UPDATE rate_limit_hits SET hits = 60 WHERE key = $1', [`60000/100:${key}`]);
+    await new Promise((r) => setTimeout(r, 250));
+    // …and past half the limit every hit is written at once, from either server, so the refusal at
+    // the limit is exact.
+    expect((await two.increment(key)).totalHits).toBe(61);
+    expect((await one.increment(key)).totalHits).toBe(62);
+    expect(await stored()).toBe(62);
+  });
 });

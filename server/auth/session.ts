@@ -5,6 +5,8 @@ import type { Database } from '../db/database';
 
 export const SESSION_COOKIE = 'tunefork.sid';
 const THIRTY_DAYS_MS = 30 * 24 * 60 * 60 * 1000;
+const TOUCH_EVERY_MS = 10 * 60 * 1000;
+const TOUCH_MEMO_ENTRIES = 50_000;
 
 /**
  * Sessions live in PostgreSQL (the `sessions` table), so they survive restarts and every app
@@ -13,10 +15,31 @@ const THIRTY_DAYS_MS = 30 * 24 * 60 * 60 * 1000;
  */
 export function sessionMiddleware(config: Config, db: Database) {
   const PgStore = connectPgSimple(session);
+  /**
+   * express-session touches a stored session on every request that uses it, to push its expiry
+   * (30 days) forward: one UPDATE per signed-in request. A session touched by this server in the
+   * last TOUCH_EVERY_MS keeps its expiry; at worst a session then ends that long before 30 days of
+   * idleness. Which sessions this server touched lately is a speed-up only: a server that has not
+   * seen a session touches it.
+   */
+  class ThrottledPgStore extends PgStore {
+    private readonly touchedAt = new Map<string, number>();
+    override touch(sid: string, sess: session.SessionData, callback?: (err?: unknown) => void): void {
+      const now = Date.now();
+      const last = this.touchedAt.get(sid);
+      if (last !== undefined && now - last < TOUCH_EVERY_MS) {
+        callback?.();
+        return;
+      }
+      this.touchedAt.set(sid, now);
+      if (this.touchedAt.size > TOUCH_MEMO_ENTRIES) this.touchedAt.delete(this.touchedAt.keys().next().value!);
+      super.touch(sid, sess, callback);
+    }
+  }
   return session({
     name: SESSION_COOKIE,
     secret: config.sessionSecret,
-    store: new PgStore({
+    store: new ThrottledPgStore({
       pool: db.pool,
       tableName: 'sessions',
       createTableIfMissing: false,

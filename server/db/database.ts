@@ -22,7 +22,7 @@ export function createDatabase(url: string, options: { logging?: (sql: string) =
     define: { underscored: true },
   });
   const models = initModels(sequelize);
-  const pool = new Pool({ connectionString: url, max: 5, connectionTimeoutMillis: 3_000 });
+  const pool = new Pool({ connectionString: url, max: 10, connectionTimeoutMillis: 3_000 });
   // An idle client dropped by a database restart must not crash the process.
   pool.on('error', () => {});
   return {

@@ -69,9 +69,13 @@ export function createJobQueue(config: Config, logger: Logger, options: { runWor
     async start() {
       await boss.start();
       for (const policy of Object.values(policies)) {
-        await boss.createQueue(policy.name, policy);
-        // A restart with new settings (MAIL_RETRY_LIMIT…) applies them to the existing queue.
-        await boss.updateQueue(policy.name, policy);
+        // Servers starting together create and update the same queues; PostgreSQL may then end one
+        // of them as a deadlock victim. That server tries again after a short random pause.
+        await retryOnDeadlock(async () => {
+          await boss.createQueue(policy.name, policy);
+          // A restart with new settings (MAIL_RETRY_LIMIT…) applies them to the existing queue.
+          await boss.updateQueue(policy.name, policy);
+        });
       }
       running = true;
     },
@@ -92,4 +96,16 @@ export function createJobQueue(config: Config, logger: Logger, options: { runWor
       );
     },
   };
+}
+
+/** Runs `step` again (up to 5 tries in all) when PostgreSQL ends it as a deadlock victim. */
+async function retryOnDeadlock(step: () => Promise<void>): Promise<void> {
+  for (let attempt = 1; ; attempt++) {
+    try {
+      return await step();
+    } catch (err) {
+      if ((err as { code?: string }).code !== '40P01' || attempt >= 5) throw err;
+      await new Promise((resolve) => setTimeout(resolve, 50 + Math.random() * 200 * attempt));
+    }
+  }
 }

@@ -21,48 +21,119 @@ type LimitOptions = {
 
 /**
  * An express-rate-limit store on one PostgreSQL table, so every app server behind a load balancer
- * counts the same hits. One atomic upsert per request: the row lock of INSERT … ON CONFLICT makes
- * concurrent increments from any number of servers serialise, and a window that has run out starts
- * again at 1 in the same statement. Windows are fixed per client, like express-rate-limit's
- * MemoryStore, and timed by the database clock so servers with drifting clocks agree.
+ * counts the same hits. Windows are fixed per client, like express-rate-limit's MemoryStore, and
+ * timed by the database clock so servers with drifting clocks agree.
  *
- * Written here rather than taken from a package: the PostgreSQL store kept under express-rate-limit's
- * name creates its own pool per limiter from host/port fields (not a connection string), runs its
- * own schema migrations un-awaited from its constructor, and has no way to close its pools; we
- * already have a pool, a migration runner, and tests that must exit cleanly.
+ * Near the limit every hit is one atomic upsert: the row lock of INSERT … ON CONFLICT makes
+ * concurrent increments from any number of servers serialise, and a window that has run out starts
+ * again in the same statement, so a client is refused at exactly the limit.
+ *
+ * Far below the limit, writing every hit would cost a database round trip per request and make
+ * all requests from one address queue on one row lock. So while this server's view of the count
+ * (the total at its last write plus its own hits since) is under `batchBelow` of the limit, and
+ * that view is fresher than `syncMs`, a hit is counted in memory and the hits are written
+ * together at most `syncMs` later. With two servers each batching only below half the limit,
+ * the true count is under the limit whenever either server stops batching; past that every hit
+ * is written at once. Hits batched in a server that then crashes are lost (under half a limit of
+ * one client's requests), the usual trade of a write-behind counter.
  */
 export class PostgresRateLimitStore implements Store {
   /** Counts are shared between processes, so express-rate-limit must not assume they are local. */
   readonly localKeys = false;
   prefix = '';
   private windowMs = 60_000;
+  private limit = Infinity;
+  /** Per key: the shared total at the last write, hits since, and when the window ends. */
+  private readonly local = new Map<string, { total: number; pending: number; resetAt: Date; syncedAt: number }>();
+  private flushTimer: NodeJS.Timeout | null = null;
 
   constructor(
     private readonly pool: Pool,
     private readonly name?: string,
+    private readonly batching: { batchBelow: number; syncMs: number } = { batchBelow: 0.5, syncMs: 200 },
   ) {}
 
   init(options: Options): void {
     this.windowMs = options.windowMs;
     const limit = typeof options.limit === 'number' ? options.limit : 'dynamic';
-    // The window and limit are part of the key, so a limiter whose numbers change starts afresh.
+    this.limit = typeof options.limit === 'number' ? options.limit : 0;
     this.prefix = `${this.name ? `${this.name}:` : ''}${options.windowMs}/${limit}:`;
   }
 
   async increment(key: string): Promise<ClientRateLimitInfo> {
-    const { rows } = await this.pool.query<{ hits: number; reset_at: Date }>(
-      `INSERT INTO rate_limit_hits AS r (key, hits, reset_at)
-       VALUES ($1, 1, now() + $2 * interval '1 millisecond')
+    const now = Date.now();
+    const seen = this.local.get(key);
+    if (
+      seen &&
+      seen.resetAt.getTime() > now &&
+      now - seen.syncedAt < this.batching.syncMs &&
+      seen.total + seen.pending + 1 < this.limit * this.batching.batchBelow
+    ) {
+      seen.pending += 1;
+      this.scheduleFlush();
+      return { totalHits: seen.total + seen.pending, resetTime: seen.resetAt };
+    }
+    // Written now, together with any hits still waiting for this key.
+    const hits = 1 + (seen?.pending ?? 0);
+    if (seen) seen.pending = 0;
+    try {
+      const row = await this.write(key, hits);
+      // Hits batched while the write was out stay waiting.
+      this.local.set(key, { total: row.hits, pending: this.local.get(key)?.pending ?? 0, resetAt: row.reset_at, syncedAt: Date.now() });
+      return { totalHits: row.hits, resetTime: row.reset_at };
+    } catch (error) {
+      if (seen) seen.pending += hits - 1;
+      throw error;
+    }
+  }
+
+  private async write(key: string, hits: number): Promise<{ hits: number; reset_at: Date }> {
+    const { rows } = await this.pool.query<{ hits: number; reset_at: Date }>({
+      name: 'rate-limit-increment',
+      text: `INSERT INTO rate_limit_hits AS r (key, hits, reset_at)
+       VALUES ($1, $3, now() + $2 * interval '1 millisecond')
        ON CONFLICT (key) DO UPDATE SET
-         hits = CASE WHEN r.reset_at <= now() THEN 1 ELSE r.hits + 1 END,
+         hits = CASE WHEN r.reset_at <= now() THEN EXCLUDED.hits ELSE r.hits + EXCLUDED.hits END,
          reset_at = CASE WHEN r.reset_at <= now() THEN EXCLUDED.reset_at ELSE r.reset_at END
        RETURNING hits, reset_at`,
-      [this.prefix + key, this.windowMs],
+      values: [this.prefix + key, this.windowMs, hits],
+    });
+    return rows[0];
+  }
+
+  private scheduleFlush(): void {
+    if (this.flushTimer) return;
+    this.flushTimer = setTimeout(() => {
+      this.flushTimer = null;
+      void this.flush();
+    }, this.batching.syncMs);
+    // Waiting hits never keep a process alive.
+    this.flushTimer.unref();
+  }
+
+  /** Writes every key's waiting hits; the next hit of a key then reads the fresh total. */
+  async flush(): Promise<void> {
+    const waiting = [...this.local].filter(([, entry]) => entry.pending > 0);
+    await Promise.all(
+      waiting.map(async ([key, entry]) => {
+        const hits = entry.pending;
+        entry.pending = 0;
+        try {
+          const row = await this.write(key, hits);
+          this.local.set(key, { total: row.hits, pending: this.local.get(key)?.pending ?? 0, resetAt: row.reset_at, syncedAt: Date.now() });
+        } catch {
+          // The database is away: keep the hits for the next attempt.
+          entry.pending += hits;
+        }
+      }),
     );
-    return { totalHits: rows[0].hits, resetTime: rows[0].reset_at };
+    // Forget keys whose window ended, so the map holds only active clients.
+    const now = Date.now();
+    for (const [key, entry] of this.local) if (entry.pending === 0 && entry.resetAt.getTime() <= now) this.local.delete(key);
   }
 
   async get(key: string): Promise<ClientRateLimitInfo | undefined> {
+    await this.flushKey(key);
     const { rows } = await this.pool.query<{ hits: number; reset_at: Date }>(
       'SELECT hits, reset_at FROM rate_limit_hits WHERE key = $1 AND reset_at > now()',
       [this.prefix + key],
@@ -70,13 +141,29 @@ export class PostgresRateLimitStore implements Store {
     return rows[0] ? { totalHits: rows[0].hits, resetTime: rows[0].reset_at } : undefined;
   }
 
+  private async flushKey(key: string): Promise<void> {
+    const entry = this.local.get(key);
+    if (!entry?.pending) return;
+    const hits = entry.pending;
+    entry.pending = 0;
+    const row = await this.write(key, hits);
+    this.local.set(key, { total: row.hits, pending: this.local.get(key)?.pending ?? 0, resetAt: row.reset_at, syncedAt: Date.now() });
+  }
+
   async decrement(key: string): Promise<void> {
+    const entry = this.local.get(key);
+    if (entry && entry.pending > 0) {
+      entry.pending -= 1;
+      return;
+    }
     await this.pool.query('UPDATE rate_limit_hits SET hits = GREATEST(hits - 1, 0) WHERE key = $1 AND reset_at > now()', [
       this.prefix + key,
     ]);
+    this.local.delete(key);
   }
 
   async resetKey(key: string): Promise<void> {
+    this.local.delete(key);
     await this.pool.query('DELETE FROM rate_limit_hits WHERE key = $1', [this.prefix + key]);
   }
 }

@@ -1,8 +1,8 @@
-import { QueryTypes } from 'sequelize';
 import { z } from 'zod';
 import { DISCOVER_PAGE_SIZE, discoverQuerySchema, type DiscoverPage, type DiscoverQuery, type DiscoverSetup } from '../../shared/types/community';
 import { trackTypeLabel, type TrackTypeKey } from '../../shared/types/trackTypes';
 import type { Database } from '../db/database';
+import { preparedQuery } from '../db/prepared';
 import { ApiError } from '../errors';
 
 /*
@@ -123,8 +123,9 @@ function filters(q: DiscoverQuery): Sql {
 
 type KeyedRow = CardRow & { createdKey: string; works?: number; fails?: number; wilson?: number; wilsonKey?: string };
 
+/** Each list query's shape is a prepared statement, planned once per connection (server/db/prepared.ts). */
 async function select(db: Database, sql: string, params: Record<string, unknown>): Promise<KeyedRow[]> {
-  return db.sequelize.query<KeyedRow>(sql, { replacements: params, type: QueryTypes.SELECT });
+  return preparedQuery<KeyedRow>(db.pool, sql, params);
 }
 
 const CREATED_KEY_SQL = `to_char(s.created_at AT TIME ZONE 'UTC', 'YYYY-MM-DD"T"HH24:MI:SS.US"Z"') AS "createdKey"`;

@@ -28,9 +28,31 @@ const SANITIZE_OPTIONS: sanitizeHtml.IOptions = {
 
 /** Renders racer-written markdown to HTML that is safe to insert into a page. */
 export function renderMarkdown(markdown: string): string {
-  const html = marked.parse(markdown, { async: false, gfm: true, breaks: true });
-  return sanitizeHtml(html, SANITIZE_OPTIONS);
+  if (markdown === '') return '';
+  const known = rendered.get(markdown);
+  if (known !== undefined) {
+    // Most recently used goes to the back; the front is dropped first.
+    rendered.delete(markdown);
+    rendered.set(markdown, known);
+    return known;
+  }
+  const html = sanitizeHtml(marked.parse(markdown, { async: false, gfm: true, breaks: true }), SANITIZE_OPTIONS);
+  if (markdown.length <= MEMO_MAX_INPUT) {
+    rendered.set(markdown, html);
+    if (rendered.size > MEMO_ENTRIES) rendered.delete(rendered.keys().next().value!);
+  }
+  return html;
 }
+
+/*
+ * Rendering is a pure function of the text, and a popular setup's notes are rendered on every view
+ * (parse plus sanitize costs about a millisecond), so recent results are kept: at most
+ * MEMO_ENTRIES texts of up to MEMO_MAX_INPUT characters, least recently used dropped first. Only a
+ * speed-up: every server renders the same HTML from the same text, memo or not.
+ */
+const MEMO_ENTRIES = 2_000;
+const MEMO_MAX_INPUT = 8_000;
+const rendered = new Map<string, string>();
 
 /** Counts links a piece of markdown will render, for spam limits. */
 export function countRenderedLinks(markdown: string): number {

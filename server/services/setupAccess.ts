@@ -10,7 +10,11 @@ export type Viewer = User | undefined;
  * share link; public ones to everyone. Deleted setups are gone for all; hidden ones stay visible to
  * their owner and to moderators (who need to review them).
  */
-export function canView(setup: Setup, viewer: Viewer, shareToken?: string): boolean {
+export function canView(
+  setup: Pick<Setup, 'ownerId' | 'deletedAt' | 'hiddenAt' | 'visibility' | 'shareToken'>,
+  viewer: Viewer,
+  shareToken?: string,
+): boolean {
   const isOwner = viewer?.id === setup.ownerId;
   if (setup.deletedAt) return false;
   if (setup.hiddenAt && !isOwner && viewer?.role !== 'moderator' && viewer?.role !== 'admin') return false;
