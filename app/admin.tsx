@@ -1,9 +1,10 @@
 import { useState, type ReactNode } from 'react';
-import { View } from 'react-native';
+import { StyleSheet, View } from 'react-native';
 import { AdminUserRow } from '../components/AdminUserRow';
 import { Card } from '../components/Card';
 import { Screen } from '../components/Screen';
 import { SignedInGate } from '../components/SignedInGate';
+import { TextLink } from '../components/TextLink';
 import { EmptyState, ErrorState, LoadingState } from '../components/StatusViews';
 import { TextField } from '../components/TextField';
 import { useAdminUsersQuery, useChangeRole, useSuspendUser, useUnsuspendUser } from '../hooks/admin';
@@ -11,6 +12,7 @@ import { signInHref, useMeQuery } from '../hooks/auth';
 import { describeError } from '../hooks/form';
 import { useDebouncedValue } from '../hooks/useDebouncedValue';
 import type { AdminUser } from '../shared/types/auth';
+import { space } from '../theme';
 
 const SEARCH_PAUSE_MS = 300;
 
@@ -65,6 +67,10 @@ function AdminPanel() {
   else list = <UserRows users={users.data} />;
   return (
     <>
+      <View style={styles.links}>
+        <TextLink href="/moderation" label="Review queue" />
+        <TextLink href="/moderation/audit" label="Audit log" />
+      </View>
       <TextField
         label="Search accounts"
         hint="Handle, display name or e-mail address."
@@ -98,3 +104,7 @@ export default function AdminScreen() {
     </Screen>
   );
 }
+
+const styles = StyleSheet.create({
+  links: { flexDirection: 'row', flexWrap: 'wrap', columnGap: space.lg },
+});

@@ -40,7 +40,7 @@ function MyNotifications() {
 export default function NotificationsScreen() {
   const me = useMeQuery();
   return (
-    <Screen title="Notifications" subtitle="Follows, comments, forks and changes to what you forked." back={{ href: '/activity', label: 'Back to Activity' }}>
+    <Screen title="Notifications" subtitle="Follows, comments, forks, changes to what you forked, and moderation." back={{ href: '/activity', label: 'Back to Activity' }}>
       <SignedInGate me={me} signInHref={signInHref('/notifications')}>
         {() => <MyNotifications />}
       </SignedInGate>

@@ -1,4 +1,4 @@
-import { useState } from 'react';
+import { useState, type ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { describeError } from '../hooks/form';
 import { COMMENT_EDIT_MINUTES, type CommentDto } from '../shared/types/forks';
@@ -29,6 +29,8 @@ export type CommentItemProps = {
   isReply?: boolean;
   /** Ruled off from the comment above it. */
   ruled?: boolean;
+  /** A report control for a comment (and each reply); absent where reporting is not offered. */
+  report?: (comment: CommentDto) => ReactNode;
 };
 
 const MINUTE = 60_000;
@@ -89,7 +91,7 @@ function DeleteConfirm({ comment, onDone, remove }: { comment: CommentDto; onDon
   );
 }
 
-function Actions({ comment, isReply, signedIn, now, setMode }: CommentItemProps & { setMode: (m: Mode) => void }) {
+function Actions({ comment, isReply, signedIn, now, setMode, report }: CommentItemProps & { setMode: (m: Mode) => void }) {
   if (comment.deleted) return null;
   const who = `@${comment.author.handle}`;
   const buttons = [
@@ -98,6 +100,7 @@ function Actions({ comment, isReply, signedIn, now, setMode }: CommentItemProps 
     comment.canDelete ? (
       <Button key="delete" label="Delete" variant="danger" accessibilityLabel={`Delete the comment by ${who}`} onPress={() => setMode('confirm-delete')} />
     ) : null,
+    report ? <View key="report">{report(comment)}</View> : null,
   ].filter(Boolean);
   return buttons.length > 0 ? <View style={styles.row}>{buttons}</View> : null;
 }

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { View } from 'react-native';
 import type { CommentDto } from '../shared/types/forks';
 import { CommentItem, type CommentItemActions } from './CommentItem';
@@ -13,6 +14,8 @@ export type CommentThreadProps = {
   label: string;
   /** Clock for "5 min ago" and the edit window, in ms since 1970; for tests. */
   now?: number;
+  /** A report control per comment, where reporting is offered. */
+  report?: (comment: CommentDto) => ReactNode;
 };
 
 /** Comments and replies that are not deleted: what a count beside a heading says. */
@@ -21,11 +24,11 @@ export function countVisibleComments(comments: CommentDto[]): number {
 }
 
 /** Comments with one level of replies: who, when, edited or deleted, and reply, edit and delete where allowed. */
-export function CommentThread({ comments, actions, signedIn, signInHref, label, now = Date.now() }: CommentThreadProps) {
+export function CommentThread({ comments, actions, signedIn, signInHref, label, now = Date.now(), report }: CommentThreadProps) {
   return (
     <View role="list" aria-label={label}>
       {comments.map((comment, i) => (
-        <CommentItem key={comment.id} comment={comment} actions={actions} signedIn={signedIn} signInHref={signInHref} now={now} ruled={i > 0} />
+        <CommentItem key={comment.id} comment={comment} actions={actions} signedIn={signedIn} signInHref={signInHref} now={now} ruled={i > 0} report={report} />
       ))}
     </View>
   );

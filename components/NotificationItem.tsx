@@ -39,12 +39,17 @@ export function notificationText(n: NotificationDto): string {
       return `${who} changed the original of your fork ${setupName(n)}${revision}`;
     case 'report-outcome':
       return n.setup ? `Your report about ${setupName(n)} was reviewed` : 'Your report was reviewed';
+    case 'moderation-notice':
+      return n.setup ? `The moderators acted on ${setupName(n)}` : 'The moderators made a decision about your account or posts';
   }
 }
 
 /** Where opening it leads; null when there is nothing I can open any more. */
 export function notificationHref(n: NotificationDto): Href | null {
   if (n.type === 'new-follower') return n.actor ? `/racers/${n.actor.handle}` : null;
+  // The outcome and any appeal live on the moderation pages, whether or not the setup can be opened.
+  if (n.type === 'report-outcome') return '/reports';
+  if (n.type === 'moderation-notice') return '/moderation/mine';
   if (!n.setup?.available) return null;
   const setup = `/setups/${n.setup.id}`;
   if (n.type === 'original-changed') return `${setup}/sync`;

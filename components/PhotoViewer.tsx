@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { Image, Modal, ScrollView, StyleSheet, View } from 'react-native';
 import { API_BASE } from '../hooks/api';
 import type { Photo } from '../shared/types/setups';
@@ -13,10 +14,12 @@ export type PhotoViewerProps = {
   onDelete?: () => void;
   deleting?: boolean;
   deleteError?: string | null;
+  /** A control to report the photo to moderators, for readers other than the owner. */
+  report?: ReactNode;
 };
 
 /** One photo at display size over the page, with its caption and, for the owner, a way to remove it. */
-export function PhotoViewer({ photo, onClose, onDelete, deleting = false, deleteError }: PhotoViewerProps) {
+export function PhotoViewer({ photo, onClose, onDelete, deleting = false, deleteError, report }: PhotoViewerProps) {
   const { colors } = useTheme();
   return (
     // On web the modal itself is the dialog, so it carries the name.
@@ -32,6 +35,7 @@ export function PhotoViewer({ photo, onClose, onDelete, deleting = false, delete
               style={[styles.image, { aspectRatio: photo.width / photo.height }]}
             />
             {photo.caption ? <AppText>{photo.caption}</AppText> : null}
+            {report}
             {onDelete ? (
               <SetupConfirmButton
                 label="Remove this photo"

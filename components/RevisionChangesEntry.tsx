@@ -1,4 +1,4 @@
-import { useRef, useState, type RefObject } from 'react';
+import { useRef, useState, type ReactNode, type RefObject } from 'react';
 import { StyleSheet, View, type TextInput } from 'react-native';
 import type { CommentActions } from '../hooks/comments';
 import type { UnitPreferences } from '../shared/types/auth';
@@ -10,6 +10,7 @@ import { Card } from './Card';
 import { CommentForm } from './CommentForm';
 import { CommentThread, countVisibleComments } from './CommentThread';
 import { RevisionChanges } from './RevisionChanges';
+import { ModerationPill } from './ModerationPill';
 import { LoadingState } from './StatusViews';
 import { formatDay } from './SetupSheetFormat';
 import { TextLink } from './TextLink';
@@ -30,12 +31,18 @@ export type RevisionChangesEntryProps = {
   signedIn: boolean | undefined;
   signInHref: string;
   compareLinks: { href: string; label: string }[];
+  /** Moderators hid the change note: its author and moderators still read it, marked as hidden. */
+  noteHidden?: boolean;
+  /** A control to report the change note, where offered. */
+  reportNote?: ReactNode;
+  /** A report control per comment, where offered. */
+  reportComment?: (comment: CommentDto) => ReactNode;
 };
 
 type Field = { key: string; label: string };
 
 function Comments(props: RevisionChangesEntryProps & { field: Field | null; setField: (f: Field | null) => void; inputRef: RefObject<TextInput | null> }) {
-  const { revision, comments, actions, signedIn, signInHref, field, setField, inputRef } = props;
+  const { revision, comments, actions, signedIn, signInHref, field, setField, inputRef, reportComment } = props;
   const count = Array.isArray(comments) ? countVisibleComments(comments) : null;
   return (
     <View style={styles.stack} role="region" aria-label={`Comments on revision ${revision.number}`}>
@@ -49,7 +56,7 @@ function Comments(props: RevisionChangesEntryProps & { field: Field | null; setF
       ) : comments.length === 0 ? (
         <AppText tone="muted">No comments on this change yet.</AppText>
       ) : (
-        <CommentThread comments={comments} actions={actions} signedIn={signedIn} signInHref={signInHref} label={`Comments on revision ${revision.number}`} />
+        <CommentThread comments={comments} actions={actions} signedIn={signedIn} signInHref={signInHref} label={`Comments on revision ${revision.number}`} report={reportComment} />
       )}
       <CommentForm
         label={`Comment on revision ${revision.number}`}
@@ -66,9 +73,20 @@ function Comments(props: RevisionChangesEntryProps & { field: Field | null; setF
   );
 }
 
+/** The note, or that moderators hid it (with its words for those who may still read them). */
+function ChangeNote({ note, hidden }: { note: string; hidden: boolean }) {
+  if (!hidden) return <AppText>{note || 'No change note.'}</AppText>;
+  return (
+    <View style={styles.hiddenNote}>
+      <ModerationPill label="Change note hidden by moderators" tone="waiting" />
+      {note ? <AppText tone="muted">{note}</AppText> : null}
+    </View>
+  );
+}
+
 /** One revision in the history: who changed what and why, links to compare it, and the talk about it. */
 export function RevisionChangesEntry(props: RevisionChangesEntryProps) {
-  const { revision, current, vehicleClass, units, wide, signedIn, compareLinks } = props;
+  const { revision, current, vehicleClass, units, wide, signedIn, compareLinks, noteHidden, reportNote } = props;
   const { colors } = useTheme();
   const [field, setField] = useState<Field | null>(null);
   const inputRef = useRef<TextInput>(null);
@@ -103,7 +121,8 @@ export function RevisionChangesEntry(props: RevisionChangesEntryProps) {
         </AppText>
         <TextLink href={`/racers/${revision.authorHandle}`} label={`@${revision.authorHandle}`} />
       </View>
-      <AppText>{revision.changeNote || 'No change note.'}</AppText>
+      <ChangeNote note={revision.changeNote} hidden={Boolean(noteHidden)} />
+      {reportNote}
       {wide ? (
         <View style={styles.columns}>
           <View style={styles.left}>{changes}</View>
@@ -127,4 +146,5 @@ const styles = StyleSheet.create({
   left: { flex: 3, minWidth: 0 },
   right: { flex: 2, minWidth: 0, borderLeftWidth: 1, paddingLeft: space.lg },
   below: { borderTopWidth: 1, paddingTop: space.md },
+  hiddenNote: { gap: space.xs },
 });

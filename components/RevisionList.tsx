@@ -5,6 +5,7 @@ import { space, useTheme } from '../theme';
 import { AppText } from './AppText';
 import { Button } from './Button';
 import { Card } from './Card';
+import { ModerationPill } from './ModerationPill';
 import { formatDay } from './SetupSheetFormat';
 import { TextLink } from './TextLink';
 
@@ -29,7 +30,8 @@ function RevisionItem({ revision, first }: { revision: RevisionSummary; first: b
       <AppText style={styles.bold}>
         Revision {revision.number} · {changedText(revision)}
       </AppText>
-      <AppText>{revision.changeNote || 'No change note.'}</AppText>
+      {revision.noteHidden ? <ModerationPill label="Change note hidden by moderators" tone="waiting" /> : null}
+      {revision.noteHidden && !revision.changeNote ? null : <AppText>{revision.changeNote || 'No change note.'}</AppText>}
       <View style={styles.meta}>
         <AppText variant="caption" tone="muted">
           {formatDay(revision.createdAt)} by

@@ -1,3 +1,4 @@
+import type { ReactNode } from 'react';
 import { StyleSheet, View } from 'react-native';
 import { space } from '../theme';
 import { AppText } from './AppText';
@@ -16,10 +17,12 @@ export type SetupActionsProps = {
   onDelete: () => void;
   deleting: boolean;
   deleteError: string | null;
+  /** A control to report the setup to moderators (readers other than the owner). */
+  report?: ReactNode;
 };
 
-/** Everything a reader can do with the setup: edit (owner), print, export, delete (owner). */
-export function SetupActions({ setupId, title, isOwner, share, onDelete, deleting, deleteError }: SetupActionsProps) {
+/** Everything a reader can do with the setup: edit (owner), print, export, report (others), delete (owner). */
+export function SetupActions({ setupId, title, isOwner, share, onDelete, deleting, deleteError, report }: SetupActionsProps) {
   const query = share ? `?share=${encodeURIComponent(share)}` : '';
   return (
     <Card role="region" aria-label="Setup actions">
@@ -29,6 +32,7 @@ export function SetupActions({ setupId, title, isOwner, share, onDelete, deletin
         <ButtonLink href={`/setups/${setupId}/print${query}`} label="Pit sheet to print" variant="secondary" />
         <SetupExportLink path={`/setups/${setupId}/export.json${query}`} label="Export setup file (JSON)" />
         <SetupExportLink path={`/setups/${setupId}/export.csv${query}`} label="Export as CSV" />
+        {report}
       </View>
       <AppText variant="caption" tone="muted">
         Setup files import back into Tunefork; CSV opens in a spreadsheet.

@@ -7,6 +7,8 @@ import { AppText } from './AppText';
 import { Card } from './Card';
 import { CommentForm } from './CommentForm';
 import { CommentThread, countVisibleComments } from './CommentThread';
+import { MyLimitsNotice } from './MyLimitsNotice';
+import { commentReport } from './ReportControl';
 import { ErrorState, LoadingState } from './StatusViews';
 import { TextLink } from './TextLink';
 
@@ -58,7 +60,7 @@ export function SetupComments({ setupId, share }: SetupCommentsProps) {
       {onSetup.length === 0 ? (
         <AppText tone="muted">No comments yet. Ask about a setting, or say how it ran at your track.</AppText>
       ) : (
-        <CommentThread comments={onSetup} actions={actions} signedIn={signedIn} signInHref={signInHref(here)} label="Comments on this setup" />
+        <CommentThread comments={onSetup} actions={actions} signedIn={signedIn} signInHref={signInHref(here)} label="Comments on this setup" report={commentReport} />
       )}
       {onChanges > 0 ? (
         <View style={styles.row}>
@@ -68,6 +70,7 @@ export function SetupComments({ setupId, share }: SetupCommentsProps) {
           <TextLink href={withShare(`/setups/${setupId}/history`, share)} label="Read them in the history" />
         </View>
       ) : null}
+      {signedIn ? <MyLimitsNotice focus="comments" /> : null}
       <CommentForm
         label="Comment on this setup"
         submitLabel="Post comment"

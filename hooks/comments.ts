@@ -2,6 +2,7 @@ import { useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import { commentListSchema, commentResponseSchema, type CommentCreate, type CommentDto } from '../shared/types/forks';
 import { apiMutate, apiRequest } from './api';
 import { STALE } from './queryClient';
+import { reportKeys } from './reports';
 import { setupKeys } from './setups';
 
 export const commentKeys = {
@@ -21,13 +22,15 @@ export function useCommentsQuery(setupId: number, share?: string) {
   });
 }
 
-/** After any comment write: the lists, and the setup page's comment count (every share variant). */
+/** After any comment write: the lists, the setup page's comment count (every share variant) and my hourly limits. */
 function useCommentInvalidation(setupId: number) {
   const queryClient = useQueryClient();
   return () =>
     Promise.all([
       queryClient.invalidateQueries({ queryKey: commentKeys.setup(setupId) }),
       queryClient.invalidateQueries({ queryKey: [...setupKeys.all, 'detail', setupId] }),
+      // A new account's count of comments this hour.
+      queryClient.invalidateQueries({ queryKey: reportKeys.limits() }),
     ]);
 }
 

@@ -15,6 +15,10 @@ export const STALE = {
   garage: 60_000,
   /** A setup page: revisions by its owner arrive through mutations; others' views refresh on focus. */
   setup: 30_000,
+  /** Moderators work through the queue together: another's action should show within seconds. */
+  moderationQueue: 10_000,
+  /** My reports, my limits and actions on my posts change slowly and mostly through my own writes. */
+  moderationMine: 30_000,
   /** The dev mailbox exists to show the mail that was just sent. */
   mailbox: 0,
 } as const;

@@ -13,6 +13,7 @@ import {
 import { z } from '../shared/types/zod';
 import { apiMutate, apiRequest, apiUpload } from './api';
 import { STALE } from './queryClient';
+import { reportKeys } from './reports';
 
 export const setupKeys = {
   all: ['setups'] as const,
@@ -74,10 +75,15 @@ export function useCreateCar() {
 }
 
 export function useCreateSetup() {
+  const queryClient = useQueryClient();
   const write = useSetupCacheWriter();
   return useMutation({
     mutationFn: async (input: SetupCreate) => (await apiMutate('/setups', { body: input, schema: setupDetailResponseSchema })).setup,
-    onSuccess: write,
+    onSuccess: (setup) => {
+      write(setup);
+      // A new account's count of setups this hour just went up.
+      void queryClient.invalidateQueries({ queryKey: reportKeys.limits() });
+    },
   });
 }
 

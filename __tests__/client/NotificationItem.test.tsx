@@ -49,7 +49,9 @@ describe('a notification', () => {
       [{ type: 'comment-reply' }, '@rafi_new replied to your comment on “Hollow Pines — loose and dusty”', '/setups/7'],
       [{ type: 'setup-forked' }, '@rafi_new forked “Hollow Pines — loose and dusty”', '/setups/7/family'],
       [{ type: 'original-changed', setup: { id: 31, title: 'My fork', available: true }, revision: { id: 95, number: 5, setupId: 7 } }, '@rafi_new changed the original of your fork “My fork” (revision 5)', '/setups/31/sync'],
-      [{ type: 'report-outcome', actor: null, setup: null }, 'Your report was reviewed', null],
+      [{ type: 'report-outcome', actor: null, setup: null }, 'Your report was reviewed', '/reports'],
+      [{ type: 'moderation-notice', actor: null }, 'The moderators acted on “Hollow Pines — loose and dusty”', '/moderation/mine'],
+      [{ type: 'moderation-notice', actor: null, setup: null }, 'The moderators made a decision about your account or posts', '/moderation/mine'],
       [{ type: 'comment-on-setup', setup: { id: 7, title: null, available: false } }, '@rafi_new commented on a setup you can no longer open', null],
     ];
     for (const [overrides, text, href] of cases) {

@@ -100,6 +100,18 @@ const EXPECTED: Record<string, Access> = {
   'DELETE /api/runs/:id': 'signedIn',
   'GET /api/runs/compare': 'signedIn',
   'POST /api/markdown/preview': 'signedIn',
+  // Moderation: the review queue, actions, appeals and the audit log
+  'GET /api/moderation/queue': 'moderator',
+  'POST /api/moderation/actions': 'moderator',
+  'GET /api/moderation/audit': 'moderator',
+  'GET /api/moderation/mine': 'signedIn',
+  'POST /api/moderation/appeals/:id/decide': 'moderator',
+  'POST /api/appeals': 'signedIn',
+  'POST /api/appeals/suspension': 'public',
+  // Reports and limits
+  'POST /api/reports': 'signedIn',
+  'GET /api/reports/mine': 'signedIn',
+  'GET /api/me/limits': 'signedIn',
 };
 
 type Layer = { route?: { methods: Record<string, boolean> }; handle?: { stack?: Layer[] } };

@@ -29,10 +29,13 @@ export function uniqueRacer(prefix = 'racer') {
 
 export const GOOD_PASSWORD = 'rear-toe-three-degrees';
 
-/** Creates a racer directly in the database (verified unless told otherwise). */
+/**
+ * Creates a racer directly in the database (verified unless told otherwise). The account is
+ * `ageDays` old (30 unless told otherwise), so the new-account limits stay out of tests not about them.
+ */
 export async function createRacer(
   db: Database,
-  opts: { role?: Role; password?: string | null; verified?: boolean; prefix?: string } = {},
+  opts: { role?: Role; password?: string | null; verified?: boolean; prefix?: string; ageDays?: number } = {},
 ) {
   const r = uniqueRacer(opts.prefix ?? opts.role ?? 'racer');
   const password = opts.password === undefined ? GOOD_PASSWORD : opts.password;
@@ -41,6 +44,7 @@ export async function createRacer(
     role: opts.role ?? 'racer',
     passwordHash: password ? await hashPassword(password, 4) : null,
     emailVerifiedAt: opts.verified === false ? null : new Date(),
+    createdAt: new Date(Date.now() - (opts.ageDays ?? 30) * 86_400_000),
   });
   return { user, password: password ?? '', ...r };
 }

@@ -34,7 +34,16 @@ function destinations(me: Me, showMailbox: boolean): LinkListItem[] {
   const items: LinkListItem[] = [
     { href: `/racers/${me.handle}`, label: 'Your public page', description: 'What other racers see' },
     { href: '/settings', label: 'Settings', description: 'Profile, units, e-mail, password and sign-in methods' },
+    { href: '/reports', label: 'My reports', description: 'What you reported and what came of it' },
+    { href: '/moderation/mine', label: 'Moderation of my posts', description: 'Anything moderators hid or warned about, and appeals' },
   ];
+  // Moderators come here to work the queue, so it leads the list.
+  if (me.role !== 'racer') {
+    items.unshift(
+      { href: '/moderation', label: 'Review queue', description: 'Reports and appeals waiting for a moderator' },
+      { href: '/moderation/audit', label: 'Audit log', description: 'Every moderation and role action' },
+    );
+  }
   if (me.role === 'admin') items.push({ href: '/admin', label: 'Admin', description: 'Roles and suspensions' });
   if (showMailbox) items.push({ href: '/dev/mailbox', label: 'Mailbox', description: 'Mail the server sent (development only)' });
   return items;

@@ -3,6 +3,7 @@ import { useState } from 'react';
 import { FollowCard, type FollowListChoice } from '../../components/FollowCard';
 import { FollowList } from '../../components/FollowList';
 import { RacerProfile } from '../../components/RacerProfile';
+import { ReportControl } from '../../components/ReportControl';
 import { Screen } from '../../components/Screen';
 import { EmptyState, ErrorState, LoadingState } from '../../components/StatusViews';
 import { ApiRequestError } from '../../hooks/api';
@@ -73,6 +74,7 @@ export default function RacerScreen() {
     <Screen title={racer.data.displayName} back={back}>
       <RacerProfile racer={racer.data} />
       <Follows handle={racer.data.handle} />
+      <ReportControl target={{ type: 'racer', id: racer.data.id }} ownerHandle={racer.data.handle} what={`the profile of @${racer.data.handle}`} />
     </Screen>
   );
 }

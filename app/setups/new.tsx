@@ -1,5 +1,6 @@
 import { router, useLocalSearchParams } from 'expo-router';
 import { CarsRequired } from '../../components/CarsRequired';
+import { MyLimitsNotice } from '../../components/MyLimitsNotice';
 import { Screen } from '../../components/Screen';
 import { SetupCreateForm } from '../../components/SetupCreateForm';
 import { SignedInGate } from '../../components/SignedInGate';
@@ -39,7 +40,12 @@ export default function NewSetupScreen() {
   return (
     <Screen title="New setup" subtitle="A sheet to tune from, with a record of every change." back={{ href: '/garage', label: 'Back to Garage' }}>
       <SignedInGate me={me} signInHref={signInHref(here)}>
-        {() => <NewSetup carId={carId} />}
+        {() => (
+          <>
+            <MyLimitsNotice focus="setups" />
+            <NewSetup carId={carId} />
+          </>
+        )}
       </SignedInGate>
     </Screen>
   );

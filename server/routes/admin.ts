@@ -24,7 +24,7 @@ export function adminRouter(deps: RouterDeps): Router {
   });
 
   r.post('/users/:id/unsuspend', 'admin', async (req, res) => {
-    res.json({ user: await unsuspendUser(deps.db, Number(req.params.id)) });
+    res.json({ user: await unsuspendUser(deps.db, req.user!, Number(req.params.id)) });
   });
   r.post('/kits', 'admin', async (req, res) => {
     res.status(201).json({ kit: await createKit(deps.db, req.body) });

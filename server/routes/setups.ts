@@ -98,7 +98,7 @@ export function setupsRouter(deps: RouterDeps): Router {
 
   r.get('/:id/export.json', 'public', async (req, res) => {
     const setup = await findViewableSetup(db, Number(req.params.id), req.user, shareToken(req));
-    res.attachment(fileName(setup.title, 'tunefork.json')).json(await exportSetupDocument(db, setup));
+    res.attachment(fileName(setup.title, 'tunefork.json')).json(await exportSetupDocument(db, setup, req.user));
   });
 
   r.get('/:id/export.csv', 'public', async (req, res) => {

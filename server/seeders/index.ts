@@ -12,6 +12,7 @@ import { validateSetupValues, getTemplate } from '../../shared/types/templates';
 import type { StoredSetupValues } from '../../shared/types/setups';
 import { DEMO_KITS, DEMO_MAKERS, DEMO_RACERS, DEMO_TRACKS } from './demoWorld';
 import { seedDemoTrackDays } from './demoTrackDays';
+import { seedDemoModeration } from './demoModeration';
 
 /** True when nothing a person could have created is in the database yet. */
 export async function isDatabaseEmpty(db: Database): Promise<boolean> {
@@ -71,6 +72,8 @@ export async function seedDemoWorld(db: Database, options: SeedOptions): Promise
     await seedDemoTrackDays(db, transaction);
   });
   if (options.photos) await seedDemoPhotos(db, options.photos);
+  // After the commit: reports go through the reports service, in transactions of their own.
+  await seedDemoModeration(db, { bcryptCost: options.bcryptCost });
 }
 
 /** One drawn photo on each styled public demo setup that has none yet. */

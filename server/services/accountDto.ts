@@ -23,6 +23,7 @@ export function toMe(user: User): Me {
 
 export function toPublicRacer(user: User): PublicRacer {
   return {
+    id: user.id,
     handle: user.handle,
     displayName: user.displayName,
     bioHtml: renderMarkdown(user.bio),

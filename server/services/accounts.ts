@@ -10,6 +10,7 @@ import { consumeEmailToken, issueEmailToken } from './emailTokens';
 import type { Mailer } from './mail';
 import { passwordResetMail, verificationMail } from './mailTemplates';
 import { hashPassword, verifyPassword } from './passwords';
+import { suspendedSignInDetails } from './moderation/appeals';
 import { destroySessionsOf } from './sessions';
 import { assertMaySignIn, clearFailedSignIns, recordFailedSignIn } from './signInThrottle';
 
@@ -57,12 +58,13 @@ export async function signUp(deps: AccountDeps, input: SignUpRequest): Promise<U
   return user;
 }
 
-/** Throws 403 with the end date when the account is suspended. */
-export function assertNotSuspended(user: User): void {
+/** Throws 403 with the end date when the account is suspended; `appeal` adds how to appeal (see suspendedSignInDetails). */
+export function assertNotSuspended(user: User, appeal: Record<string, unknown> = {}): void {
   if (user.isSuspended()) {
     throw new ApiError(403, 'account_suspended', `This account is suspended ${describeSuspension(user)}.`, {
       until: user.suspendedIndefinitely ? null : (user.suspendedUntil?.toISOString() ?? null),
       reason: user.suspensionReason,
+      ...appeal,
     });
   }
 }
@@ -81,7 +83,8 @@ export async function authenticateWithPassword(deps: AccountDeps, login: string,
     await recordFailedSignIn(deps.db, user.id, clientKey);
     throw BAD_CREDENTIALS();
   }
-  assertNotSuspended(user);
+  // The password was right: the refusal may carry a token to appeal the suspension without a session.
+  if (user.isSuspended()) assertNotSuspended(user, await suspendedSignInDetails(deps.db, deps.config.sessionSecret, user.id));
   await clearFailedSignIns(deps.db, user.id);
   return user;
 }

@@ -3,6 +3,7 @@ import type { z } from 'zod';
 import { diffSetupValues } from '../../shared/compute/setup/diff';
 import { ERROR_CODES } from '../../shared/types/errors';
 import { COMMENT_EDIT_MINUTES, commentCreateSchema, commentUpdateSchema, type CommentDto } from '../../shared/types/forks';
+import type { HiddenNotice } from '../../shared/types/moderation';
 import { fieldsByKey, getTemplate } from '../../shared/types/templates';
 import type { Database } from '../db/database';
 import { ApiError } from '../errors';
@@ -10,6 +11,8 @@ import type { Comment } from '../models/Comment';
 import type { Setup } from '../models/Setup';
 import type { User } from '../models/User';
 import { renderMarkdown } from './markdown';
+import { hiddenNoticesOf } from './moderation/visibility';
+import { assertNewAccountMayPost } from './moderation/limits';
 import { canView, findViewableSetup, type Viewer } from './setupAccess';
 
 const EDIT_WINDOW_MS = COMMENT_EDIT_MINUTES * 60_000;
@@ -72,6 +75,20 @@ function toDto(comment: Comment, setup: Setup, viewer: Viewer, now: number): Com
   };
 }
 
+/** Why moderators hid the comments the viewer wrote (or, for moderators, any): a query only when there are such. */
+function hiddenNoticesFor(db: Database, rows: Comment[], viewer: Viewer): Promise<Map<number, HiddenNotice>> {
+  const ids = rows.filter((r) => r.hiddenAt && (r.authorId === viewer?.id || isModerator(viewer))).map((r) => r.id);
+  return hiddenNoticesOf(db, 'comment', ids);
+}
+
+function withHiddenNotices(dtos: CommentDto[], notices: Map<number, HiddenNotice>): CommentDto[] {
+  for (const dto of dtos) {
+    const notice = notices.get(dto.id);
+    if (notice) dto.hidden = notice;
+  }
+  return dtos;
+}
+
 /** Top-level comments with their replies nested; replies whose thread the viewer cannot see are left out. */
 function nestReplies(dtos: CommentDto[]): CommentDto[] {
   const topLevel = new Map(dtos.filter((c) => c.parentId === null).map((c) => [c.id, c]));
@@ -88,7 +105,7 @@ export async function listComments(db: Database, setupId: number, viewer: Viewer
   const setup = await findViewableSetup(db, setupId, viewer, shareToken);
   const now = Date.now();
   const rows = await findVisibleComments(db, { setupId: setup.id }, viewer);
-  return nestReplies(rows.map((row) => toDto(row, setup, viewer, now)));
+  return nestReplies(withHiddenNotices(rows.map((row) => toDto(row, setup, viewer, now)), await hiddenNoticesFor(db, rows, viewer)));
 }
 
 /** One comment as the viewer sees it, with its replies when it starts a thread. */
@@ -96,7 +113,7 @@ async function commentDto(db: Database, setup: Setup, comment: Comment, viewer: 
   const rootId = comment.parentId ?? comment.id;
   const rows = await findVisibleComments(db, { setupId: setup.id, [Op.or]: [{ id: rootId }, { parentId: rootId }] }, viewer);
   const now = Date.now();
-  const dtos = rows.map((row) => toDto(row, setup, viewer, now));
+  const dtos = withHiddenNotices(rows.map((row) => toDto(row, setup, viewer, now)), await hiddenNoticesFor(db, rows, viewer));
   nestReplies(dtos);
   const dto = dtos.find((d) => d.id === comment.id);
   if (!dto) throw ApiError.notFound('That comment');
@@ -163,6 +180,7 @@ export function onCommentCreated(listener: CommentListener): void {
 /** Posts a comment on a setup the racer can see (an unlisted one with its share token in `share`). */
 export async function createComment(db: Database, user: User, setupId: number, input: unknown): Promise<CommentDto> {
   const data = parseInput(commentCreateSchema, input);
+  await assertNewAccountMayPost(db, user, { kind: 'comment', texts: { bodyMarkdown: data.bodyMarkdown } });
   const setup = await findViewableSetup(db, setupId, user, data.share);
   const target = data.parentId !== null ? await replyTarget(db, setup, user, data) : await topLevelTarget(db, setup, data);
   const comment = await db.models.Comment.create({ setupId: setup.id, authorId: user.id, bodyMd: data.bodyMarkdown, ...target });
@@ -189,6 +207,7 @@ async function findOwnComment(db: Database, user: User, id: number): Promise<{ c
 /** Changes the body of the author's comment within the edit window; marks it edited. */
 export async function editComment(db: Database, user: User, id: number, input: unknown): Promise<CommentDto> {
   const { bodyMarkdown } = parseInput(commentUpdateSchema, input);
+  await assertNewAccountMayPost(db, user, { kind: 'text', texts: { bodyMarkdown } });
   const { comment, setup } = await findOwnComment(db, user, id);
   if (comment.deletedAt) throw new ApiError(403, ERROR_CODES.forbidden, 'Deleted comments cannot be edited.');
   if (Date.now() - comment.createdAt.getTime() >= EDIT_WINDOW_MS) throw new ApiError(403, ERROR_CODES.forbidden, EDIT_WINDOW_MESSAGE);

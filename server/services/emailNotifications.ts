@@ -80,7 +80,12 @@ export type ComposedNotification = { subject: string; lines: string[]; link: { l
  * worth mailing any more: the setup was deleted or hidden, or the racer who acted is suspended.
  */
 export async function composeNotification(pool: Pool, publicUrl: string, n: NotificationMailJob): Promise<ComposedNotification | null> {
-  const [actor, title] = await Promise.all([person(pool, n.actorId), setupTitle(pool, n.setupId)]);
+  // Moderation outcomes are about hidden things on purpose: they are mailed even when the setup is hidden.
+  const aboutModeration = n.type === 'report-outcome' || n.type === 'moderation-notice';
+  const [actor, title] = await Promise.all([
+    person(pool, n.actorId),
+    aboutModeration ? Promise.resolve(undefined) : setupTitle(pool, n.setupId),
+  ]);
   if (title === null || actor?.suspended) return null;
   const who = actor ? actor.displayName : 'A racer';
   const quoted = `“${title ?? 'your setup'}”`;
@@ -137,6 +142,13 @@ export async function composeNotification(pool: Pool, publicUrl: string, n: Noti
         lines: [detail || 'A moderator reviewed your report. Thank you for helping keep Tunefork useful.'],
         link: { label: 'Open Tunefork', url: `${publicUrl}/` },
         digestLine: `A moderator reviewed your report${detail ? `: ${detail}` : ''}`,
+      };
+    case 'moderation-notice':
+      return {
+        subject: 'A message from the Tunefork moderators',
+        lines: [detail || 'The moderators made a decision about your content or account.'],
+        link: { label: 'See what was decided and how to appeal', url: `${publicUrl}/moderation/mine` },
+        digestLine: `The moderators made a decision${detail ? `: ${detail}` : ''}`,
       };
   }
 }

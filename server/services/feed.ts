@@ -82,7 +82,10 @@ function feedSql(cursor: FeedCursor | null): string {
           AND NOT EXISTS (SELECT 1 FROM setups o WHERE o.id = s.forked_from_setup_id AND o.owner_id = $1 AND o.hidden_at IS NULL AND o.deleted_at IS NULL)
         ORDER BY s.created_at DESC, s.id DESC LIMIT $2)
       UNION ALL
-      (SELECT 'revision', r.id, r.created_at, u.handle, u.display_name, s.id, s.title, s.vehicle_class, r.number, r.change_note, NULL, NULL
+      (SELECT 'revision', r.id, r.created_at, u.handle, u.display_name, s.id, s.title, s.vehicle_class, r.number,
+              -- A change note hidden by moderators is blanked; the change itself stays in the feed.
+              CASE WHEN EXISTS (SELECT 1 FROM content_hides h WHERE h.target_type = 'revision' AND h.target_id = r.id) THEN '' ELSE r.change_note END,
+              NULL, NULL
          FROM follows f
          JOIN users u ON u.id = f.followee_id AND ${activeRacer('u')}
          JOIN setups s ON s.owner_id = f.followee_id AND ${listableSetup('s')}
@@ -140,7 +143,10 @@ export async function getFeed(db: Database, me: User, rawCursor: unknown): Promi
   const cursor = decodeCursor(rawCursor, feedCursorSchema);
   const params: Array<string | number> = [me.id, FEED_PAGE_SIZE + 1];
   if (cursor) params.push(cursor[0], cursor[2]);
-  const { rows } = await db.pool.query<FeedRow>(feedSql(cursor), params);
+  // A named statement per shape of the query (first page, or after a cursor of each kind): each
+  // connection plans it once instead of on every request, where planning cost as much as running.
+  const shape = cursor ? cursor[1] : 'first';
+  const { rows } = await db.pool.query<FeedRow>({ name: `feed-${shape}`, text: feedSql(cursor), values: params });
   const page = rows.slice(0, FEED_PAGE_SIZE);
   const last = page[page.length - 1];
   return {
@@ -162,7 +168,7 @@ export async function suggestRacers(db: Database, me: User): Promise<FeedSuggest
     `SELECT u.handle, u.display_name, count(DISTINCT k.id)::int AS fork_count, count(DISTINCT s.id)::int AS setup_count
        FROM users u
        JOIN setups s ON s.owner_id = u.id AND ${listableSetup('s')}
-       LEFT JOIN setups k ON k.forked_from_setup_id = s.id AND k.deleted_at IS NULL AND k.owner_id <> u.id
+       LEFT JOIN setups k ON k.forked_from_setup_id = s.id AND k.deleted_at IS NULL AND k.hidden_at IS NULL AND k.owner_id <> u.id
       WHERE u.id <> $1 AND ${activeRacer('u')}
         AND (cardinality($2::text[]) = 0 OR s.vehicle_class = ANY ($2::text[]))
         AND NOT EXISTS (SELECT 1 FROM follows f WHERE f.follower_id = $1 AND f.followee_id = u.id)

@@ -11,6 +11,7 @@ import type { Setup } from '../models/Setup';
 import type { SetupRevision } from '../models/SetupRevision';
 import type { User } from '../models/User';
 import { findOwnCar } from './garage';
+import { assertNewAccountMayPost } from './moderation/limits';
 import { findViewableSetup } from './setupAccess';
 import { validatedValues } from './setups';
 
@@ -133,6 +134,7 @@ function forkChangeNote(prepared: PreparedFork, stockTaken: StockForkPlan['optio
 export async function forkSetup(db: Database, user: User, sourceId: number, input: unknown): Promise<Setup> {
   const data = forkRequestSchema.parse(input);
   refuseOversizedIds(data);
+  await assertNewAccountMayPost(db, user, { kind: 'setup' });
   const prepared = await prepareFork(db, user, sourceId, data);
   const { source, revision, car, plan } = prepared;
   const vehicleClass = car.kit!.vehicleClass;

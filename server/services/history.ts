@@ -2,6 +2,7 @@ import { diffSetupValues } from '../../shared/compute/setup/diff';
 import type { History, RevisionDetail } from '../../shared/types/forks';
 import type { Database } from '../db/database';
 import { ApiError } from '../errors';
+import { isNoteHidden, noteHiddenAttribute, visibleChangeNote } from './moderation/visibility';
 import { findViewableSetup, type Viewer } from './setupAccess';
 
 const authorHandle = (db: Database) => ({ model: db.models.User, as: 'author', attributes: ['handle'] });
@@ -14,6 +15,7 @@ export async function getHistory(db: Database, setupId: number, viewer: Viewer, 
   const setup = await findViewableSetup(db, setupId, viewer, share);
   const revisions = await db.models.SetupRevision.findAll({
     where: { setupId: setup.id },
+    attributes: { include: [noteHiddenAttribute(db)] },
     include: [authorHandle(db)],
     order: [['number', 'DESC']],
   });
@@ -23,7 +25,7 @@ export async function getHistory(db: Database, setupId: number, viewer: Viewer, 
       return {
         id: revision.id,
         number: revision.number,
-        changeNote: revision.changeNote,
+        changeNote: visibleChangeNote(revision.changeNote, isNoteHidden(revision), revision.authorId, viewer),
         authorHandle: revision.author?.handle ?? '',
         createdAt: revision.createdAt.toISOString(),
         changes: previous
@@ -39,7 +41,7 @@ export async function getRevisionDetail(db: Database, setupId: number, number: n
   const setup = await findViewableSetup(db, setupId, viewer, share);
   if (!Number.isSafeInteger(number) || number < 1) throw ApiError.notFound('That revision');
   const [revision, owner, car] = await Promise.all([
-    db.models.SetupRevision.findOne({ where: { setupId: setup.id, number }, include: [authorHandle(db)] }),
+    db.models.SetupRevision.findOne({ where: { setupId: setup.id, number }, attributes: { include: [noteHiddenAttribute(db)] }, include: [authorHandle(db)] }),
     db.models.User.findByPk(setup.ownerId, { attributes: ['handle'] }),
     db.models.Car.findByPk(setup.carId, { include: [{ model: db.models.Kit, as: 'kit', attributes: ['name'] }] }),
   ]);
@@ -57,7 +59,7 @@ export async function getRevisionDetail(db: Database, setupId: number, number: n
       id: revision.id,
       number: revision.number,
       values: revision.values,
-      changeNote: revision.changeNote,
+      changeNote: visibleChangeNote(revision.changeNote, isNoteHidden(revision), revision.authorId, viewer),
       authorHandle: revision.author?.handle ?? '',
       createdAt: revision.createdAt.toISOString(),
     },

@@ -6,6 +6,7 @@ import type { Transaction } from 'sequelize';
 import type { Setup } from '../models/Setup';
 import type { SetupRevision } from '../models/SetupRevision';
 import type { User } from '../models/User';
+import { assertNewAccountMayPost } from './moderation/limits';
 import { findOwnSetup } from './setupAccess';
 import { validatedValues } from './setups';
 
@@ -47,6 +48,7 @@ export async function revisionSaved(db: Database, setup: Setup, revision: SetupR
  */
 export async function saveRevision(db: Database, owner: User, setupId: number, input: RevisionCreate): Promise<SavedRevision> {
   const data = revisionCreateSchema.parse(input);
+  await assertNewAccountMayPost(db, owner, { kind: 'text', texts: { changeNote: data.changeNote } });
   const found = await findOwnSetup(db, owner.id, setupId);
   const { values, warnings } = validatedValues(found.vehicleClass, data.values);
   const revision = await db.sequelize.transaction(async (transaction) => {

@@ -7,13 +7,19 @@ import type { Setup } from '../models/Setup';
 import type { User } from '../models/User';
 import { createSetupWithValues } from './setupImport';
 import { conditionsOf } from './setupDto';
+import { hiddenNoticeOf, visibleChangeNote } from './moderation/visibility';
 
-/** Tunefork's JSON document for one setup at its current revision. */
-export async function exportSetupDocument(db: Database, setup: Setup): Promise<SetupDocument> {
-  const [revision, car] = await Promise.all([
+/**
+ * Tunefork's JSON document for one setup at its current revision. A change note moderators hid is
+ * left out unless `viewer` wrote it or moderates.
+ */
+export async function exportSetupDocument(db: Database, setup: Setup, viewer?: Pick<User, 'id' | 'role'>): Promise<SetupDocument> {
+  const [revision, car, noteHidden] = await Promise.all([
     db.models.SetupRevision.findByPk(setup.currentRevisionId!),
     db.models.Car.findByPk(setup.carId, { include: [{ model: db.models.Kit, as: 'kit', include: [{ model: db.models.Maker, as: 'maker' }] }] }),
+    hiddenNoticeOf(db, 'revision', setup.currentRevisionId!).then((notice) => notice !== null),
   ]);
+  const changeNote = visibleChangeNote(revision!.changeNote, noteHidden, revision!.authorId, viewer);
   return {
     format: SETUP_DOCUMENT_FORMAT,
     formatVersion: SETUP_DOCUMENT_VERSION,
@@ -25,7 +31,7 @@ export async function exportSetupDocument(db: Database, setup: Setup): Promise<S
       kit: { maker: car!.kit!.maker?.name ?? '', name: car!.kit!.name },
       conditions: conditionsOf(setup),
       notesMarkdown: setup.notesMd,
-      revision: { number: revision!.number, createdAt: revision!.createdAt.toISOString(), changeNote: revision!.changeNote },
+      revision: { number: revision!.number, createdAt: revision!.createdAt.toISOString(), changeNote },
       values: revision!.values,
     },
   };

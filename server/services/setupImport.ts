@@ -6,10 +6,12 @@ import { ApiError } from '../errors';
 import type { Setup } from '../models/Setup';
 import type { User } from '../models/User';
 import { findOwnCar } from './garage';
+import { assertNewAccountMayPost } from './moderation/limits';
 import { validatedValues } from './setups';
 
 /** Creates a private setup with revision 1 holding an imported document's values. */
 export async function createSetupWithValues(db: Database, owner: User, carId: number, doc: SetupDocument): Promise<Setup> {
+  await assertNewAccountMayPost(db, owner, { kind: 'setup', texts: { 'document.setup.notesMarkdown': doc.setup.notesMarkdown } });
   const car = await findOwnCar(db, owner.id, carId);
   if (car.kit!.vehicleClass !== doc.setup.vehicleClass) {
     throw ApiError.validation({ carId: 'That file is for another class of car; pick a car of the same class.' });

@@ -3,6 +3,7 @@ import type { Database } from '../db/database';
 import { ApiError } from '../errors';
 import type { User } from '../models/User';
 import { deletePhoto, photoUrls, storeUploadedPhoto, type PhotoDeps, type UploadedPhotoFile } from './photos';
+import { assertNewAccountMayPost } from './moderation/limits';
 import { findOwnSetup } from './setupAccess';
 
 /** Photos attached to a setup, in their order; hidden photos are left out. */
@@ -25,6 +26,7 @@ export async function listSetupPhotos(db: Database, setupId: number): Promise<Ph
 
 /** Stores an uploaded photo and attaches it to one of the racer's setups, last in order. */
 export async function addSetupPhoto(deps: PhotoDeps, owner: User, setupId: number, file: UploadedPhotoFile, caption?: string): Promise<void> {
+  await assertNewAccountMayPost(deps.db, owner, { kind: 'photo' });
   const setup = await findOwnSetup(deps.db, owner.id, setupId);
   const { rows } = await deps.db.pool.query<{ n: number; last: number }>(
     'SELECT count(*)::int AS n, COALESCE(max(position), -1)::int AS last FROM setup_photos WHERE setup_id = $1',

@@ -1,7 +1,6 @@
 import crypto from 'node:crypto';
 import { QueryTypes } from 'sequelize';
 import type { Lineage, SetupCreate, SetupDetail, SetupMetaUpdate, StoredSetupValues } from '../../shared/types/setups';
-import type { HiddenNotice } from '../../shared/types/moderation';
 import { setupCreateSchema, setupMetaUpdateSchema } from '../../shared/types/setups';
 import { getTemplate, validateSetupValues } from '../../shared/types/templates';
 import { diffSetupValues } from '../../shared/compute/setup/diff';
@@ -10,8 +9,9 @@ import { ApiError } from '../errors';
 import type { Setup } from '../models/Setup';
 import type { User } from '../models/User';
 import { findOwnCar } from './garage';
+import { assertNewAccountMayPost } from './moderation/limits';
 import { renderMarkdown } from './markdown';
-import { listSetupPhotos } from './setupPhotos';
+import { photoUrls } from './photos';
 import { canView, findOwnSetup, findViewableSetup, type Viewer } from './setupAccess';
 import { conditionsOf } from './setupDto';
 
@@ -29,6 +29,7 @@ function conditionColumns(c: SetupCreate['conditions']) {
 /** Creates a setup on one of my cars from the kit's stock sheet or a copy of my own setup; revision 1 in the same transaction. */
 export async function createSetup(db: Database, owner: User, input: SetupCreate): Promise<Setup> {
   const data = setupCreateSchema.parse(input);
+  await assertNewAccountMayPost(db, owner, { kind: 'setup', texts: { notesMarkdown: data.notesMarkdown } });
   const car = await findOwnCar(db, owner.id, data.carId);
   const kit = car.kit!;
   let startValues: StoredSetupValues = kit.stockValues;
@@ -64,107 +65,148 @@ export async function createSetup(db: Database, owner: User, input: SetupCreate)
   });
 }
 
+/** The setup page's one row: the setup, its car, kit, maker and owner, its hide, its counts and its original. */
+const DETAIL_SQL = `
+  SELECT s.id, s.owner_id, s.title, s.visibility, s.share_token, s.vehicle_class, s.template_version, s.track_type,
+         s.temperature_c, s.grip, s.notes_md, s.current_revision_id, s.hidden_at, s.deleted_at, s.created_at, s.updated_at,
+         s.fork_count, s.forked_from_setup_id,
+         u.handle AS owner_handle, u.display_name AS owner_display_name,
+         c.id AS car_id, c.nickname AS car_nickname, c.stock AS car_stock, k.name AS kit_name, COALESCE(m.name, '') AS maker_name,
+         h.hidden_at AS hide_at, h.reason AS hide_reason, h.auto AS hide_auto, h.action_id AS hide_action_id,
+         (SELECT count(*)::int FROM setups f WHERE f.family_root_id = COALESCE(s.family_root_id, s.id)
+             AND f.deleted_at IS NULL AND f.hidden_at IS NULL) AS family_fork_count,
+         (SELECT count(*)::int FROM comments cm WHERE cm.setup_id = s.id AND cm.deleted_at IS NULL AND cm.hidden_at IS NULL) AS comment_count,
+         o.id AS original_id, o.title AS original_title, o.visibility AS original_visibility, o.share_token AS original_share_token,
+         o.owner_id AS original_owner_id, o.hidden_at AS original_hidden_at, o.deleted_at AS original_deleted_at,
+         ou.handle AS original_owner_handle, fr.number AS original_revision_number,
+         (SELECT COALESCE(json_agg(json_build_object(
+                   'id', r.id, 'number', r.number, 'values', r.values, 'change_note', r.change_note, 'author_id', r.author_id,
+                   'author_handle', ru.handle, 'created_at', r.created_at, 'note_hidden', rh.target_id IS NOT NULL)
+                   ORDER BY r.number DESC), '[]')
+            FROM setup_revisions r
+            JOIN users ru ON ru.id = r.author_id
+            LEFT JOIN content_hides rh ON rh.target_type = 'revision' AND rh.target_id = r.id
+           WHERE r.setup_id = s.id) AS revisions,
+         (SELECT COALESCE(json_agg(json_build_object(
+                   'id', p.id, 'storage_key', p.storage_key, 'thumb_key', p.thumb_key, 'width', p.width, 'height', p.height, 'caption', p.caption)
+                   ORDER BY sp.position, p.id), '[]')
+            FROM setup_photos sp JOIN photos p ON p.id = sp.photo_id
+           WHERE sp.setup_id = s.id AND p.hidden_at IS NULL) AS photos
+    FROM setups s
+    JOIN users u ON u.id = s.owner_id
+    JOIN cars c ON c.id = s.car_id
+    JOIN kits k ON k.id = c.kit_id
+    LEFT JOIN makers m ON m.id = k.maker_id
+    LEFT JOIN content_hides h ON h.target_type = 'setup' AND h.target_id = s.id
+    LEFT JOIN setups o ON o.id = s.forked_from_setup_id
+    LEFT JOIN users ou ON ou.id = o.owner_id
+    LEFT JOIN setup_revisions fr ON fr.id = s.forked_from_revision_id
+   WHERE s.id = $1`;
+
+type DetailRow = {
+  id: number; owner_id: number; title: string; visibility: SetupDetail['visibility']; share_token: string;
+  vehicle_class: SetupDetail['vehicleClass']; template_version: number; track_type: SetupDetail['conditions']['trackType'];
+  temperature_c: number | null; grip: SetupDetail['conditions']['grip']; notes_md: string; current_revision_id: number;
+  hidden_at: Date | null; deleted_at: Date | null; created_at: Date; updated_at: Date; fork_count: number; forked_from_setup_id: number | null;
+  owner_handle: string; owner_display_name: string; car_id: number; car_nickname: string; car_stock: boolean; kit_name: string; maker_name: string;
+  hide_at: Date | null; hide_reason: string | null; hide_auto: boolean | null; hide_action_id: number | null;
+  family_fork_count: number; comment_count: number;
+  original_id: number | null; original_title: string | null; original_visibility: SetupDetail['visibility'] | null; original_share_token: string | null;
+  original_owner_id: number | null; original_hidden_at: Date | null; original_deleted_at: Date | null;
+  original_owner_handle: string | null; original_revision_number: number | null;
+  revisions: RevisionRow[]; photos: PhotoRow[];
+};
+
+/** One revision as the detail query aggregates it (times as JSON strings). */
+type RevisionRow = {
+  id: number; number: number; values: StoredSetupValues; change_note: string; author_id: number; author_handle: string;
+  created_at: string; note_hidden: boolean;
+};
+type PhotoRow = { id: number; storage_key: string; thumb_key: string; width: number; height: number; caption: string };
+
+/** Where a setup came from, withheld when the viewer may no longer see the original. */
+function forkedFromOf(row: DetailRow, viewer: Viewer): Lineage['forkedFrom'] {
+  if (!row.forked_from_setup_id) return null;
+  if (row.original_id === null || row.original_owner_id === null || !row.original_owner_handle) return { available: false };
+  const original = {
+    ownerId: row.original_owner_id,
+    visibility: row.original_visibility!,
+    shareToken: row.original_share_token!,
+    hiddenAt: row.original_hidden_at,
+    deletedAt: row.original_deleted_at,
+  };
+  // The fork's owner opened an unlisted original through its link, so they keep that link; anyone
+  // else sees an unlisted original only if they hold the link themselves (not through the fork).
+  const ownerOfUnlisted = viewer?.id === row.owner_id && original.visibility === 'unlisted' && !original.deletedAt && !original.hiddenAt;
+  if (!ownerOfUnlisted && !canView(original, viewer)) return { available: false };
+  return {
+    available: true,
+    setupId: row.original_id,
+    title: row.original_title!,
+    ownerHandle: row.original_owner_handle,
+    revisionNumber: row.original_revision_number ?? 0,
+    share: ownerOfUnlisted ? original.shareToken : null,
+  };
+}
+
 /**
- * Where a setup came from (withheld when the viewer may no longer see the original), how many forks
- * it and its family have, and how many comments it carries: one query.
+ * Everything the setup page shows, for a viewer allowed to see it: one prepared query (the setup
+ * with its car, owner, hide, counts, original, revisions and photos, the lists aggregated as JSON
+ * in the database), no model instances. A setup the viewer may not see is a 404 (never a 403: a private setup's existence is
+ * not revealed).
  */
-async function lineageAndComments(db: Database, setup: Setup, viewer: Viewer): Promise<{ lineage: Lineage; commentCount: number }> {
-  const [row] = await db.sequelize.query<{ forkCount: number; familyForkCount: number; commentCount: number; revisionNumber: number | null; ownerHandle: string | null }>(
-    `SELECT (SELECT count(*)::int FROM setups WHERE forked_from_setup_id = :id AND deleted_at IS NULL AND hidden_at IS NULL) AS "forkCount",
-            (SELECT count(*)::int FROM setups WHERE family_root_id = :root AND deleted_at IS NULL AND hidden_at IS NULL) AS "familyForkCount",
-            (SELECT count(*)::int FROM comments WHERE setup_id = :id AND deleted_at IS NULL AND hidden_at IS NULL) AS "commentCount",
-            (SELECT number FROM setup_revisions WHERE id = :forkedRevision) AS "revisionNumber",
-            (SELECT u.handle FROM setups s JOIN users u ON u.id = s.owner_id WHERE s.id = :forkedFrom) AS "ownerHandle"`,
-    {
-      replacements: { id: setup.id, root: setup.familyRootId ?? setup.id, forkedRevision: setup.forkedFromRevisionId ?? 0, forkedFrom: setup.forkedFromSetupId ?? 0 },
-      type: QueryTypes.SELECT,
-    },
-  );
-  let forkedFrom: Lineage['forkedFrom'] = null;
-  if (setup.forkedFromSetupId) {
-    const original = await db.models.Setup.findByPk(setup.forkedFromSetupId);
-    // The fork's owner opened an unlisted original through its link, so they keep that link; anyone
-    // else sees an unlisted original only if they hold the link themselves (not through the fork).
-    const ownerOfUnlisted =
-      !!original && viewer?.id === setup.ownerId && original.visibility === 'unlisted' && !original.deletedAt && !original.hiddenAt;
-    forkedFrom =
-      original && row.ownerHandle && (ownerOfUnlisted || canView(original, viewer))
-        ? {
-            available: true,
-            setupId: original.id,
-            title: original.title,
-            ownerHandle: row.ownerHandle,
-            revisionNumber: row.revisionNumber ?? 0,
-            share: ownerOfUnlisted ? original.shareToken : null,
-          }
-        : { available: false };
-  }
-  return {
-    lineage: { forkedFrom, forkCount: row.forkCount, familyForkCount: row.familyForkCount },
-    commentCount: row.commentCount,
-  };
-}
-
-/** Moderators' hides on a setup and on its revisions' change notes: one query. */
-async function moderationHidesOf(db: Database, setupId: number): Promise<{ setup: HiddenNotice | null; revisionIds: Set<number> }> {
-  const rows = await db.sequelize.query<{ targetType: string; targetId: number; hiddenAt: Date; reason: string; auto: boolean; actionId: number | null }>(
-    `SELECT h.target_type AS "targetType", h.target_id AS "targetId", h.hidden_at AS "hiddenAt", h.reason, h.auto, h.action_id AS "actionId"
-       FROM content_hides h
-      WHERE (h.target_type = 'setup' AND h.target_id = :id)
-         OR (h.target_type = 'revision' AND h.target_id IN (SELECT r.id FROM setup_revisions r WHERE r.setup_id = :id))`,
-    { replacements: { id: setupId }, type: QueryTypes.SELECT },
-  );
-  const own = rows.find((r) => r.targetType === 'setup');
-  return {
-    setup: own ? { hiddenAt: own.hiddenAt.toISOString(), reason: own.reason, autoHidden: own.auto, actionId: own.actionId } : null,
-    revisionIds: new Set(rows.filter((r) => r.targetType === 'revision').map((r) => r.targetId)),
-  };
-}
-
-/** Everything the setup page shows, for a viewer allowed to see it. */
 export async function getSetupDetail(db: Database, id: number, viewer: Viewer, shareToken?: string): Promise<SetupDetail> {
-  const setup = await findViewableSetup(db, id, viewer, shareToken);
-  const [car, owner, revisions] = await Promise.all([
-    db.models.Car.findByPk(setup.carId, { include: [{ model: db.models.Kit, as: 'kit', include: [{ model: db.models.Maker, as: 'maker' }] }] }),
-    db.models.User.findByPk(setup.ownerId),
-    db.models.SetupRevision.findAll({
-      where: { setupId: setup.id },
-      include: [{ model: db.models.User, as: 'author', attributes: ['handle'] }],
-      order: [['number', 'DESC']],
-    }),
-  ]);
-  const current = revisions.find((r) => r.id === setup.currentRevisionId)!;
-  const isOwner = viewer?.id === setup.ownerId;
-  const hides = await moderationHidesOf(db, setup.id);
-  const seesHidden = isOwner || viewer?.role === 'moderator' || viewer?.role === 'admin';
+  if (!Number.isSafeInteger(id) || id <= 0 || id > 2_147_483_647) throw ApiError.notFound('That setup');
+  const [row] = (await db.pool.query<DetailRow>({ name: 'setup-detail', text: DETAIL_SQL, values: [id] })).rows;
+  const access = row && { ownerId: row.owner_id, visibility: row.visibility, shareToken: row.share_token, hiddenAt: row.hidden_at, deletedAt: row.deleted_at };
+  if (!row || !canView(access, viewer, shareToken)) throw ApiError.notFound('That setup');
+  const { revisions } = row;
+  const current = revisions.find((r) => r.id === row.current_revision_id)!;
+  const isOwner = viewer?.id === row.owner_id;
+  const seesHiddenNotes = isOwner || viewer?.role === 'moderator' || viewer?.role === 'admin';
   return {
-    id: setup.id,
-    title: setup.title,
-    visibility: setup.visibility,
-    shareToken: isOwner && setup.visibility === 'unlisted' ? setup.shareToken : null,
-    owner: { handle: owner!.handle, displayName: owner!.displayName },
+    id: row.id,
+    title: row.title,
+    visibility: row.visibility,
+    shareToken: isOwner && row.visibility === 'unlisted' ? row.share_token : null,
+    owner: { handle: row.owner_handle, displayName: row.owner_display_name },
     isOwner,
-    car: { id: car!.id, nickname: car!.nickname, kitName: car!.kit!.name, makerName: car!.kit!.maker?.name ?? '', stock: car!.stock },
-    vehicleClass: setup.vehicleClass,
-    templateVersion: setup.templateVersion,
-    conditions: conditionsOf(setup),
-    notesMarkdown: setup.notesMd,
-    notesHtml: renderMarkdown(setup.notesMd),
-    currentRevision: { id: current.id, number: current.number, values: current.values, changeNote: current.changeNote, createdAt: current.createdAt.toISOString() },
+    car: { id: row.car_id, nickname: row.car_nickname, kitName: row.kit_name, makerName: row.maker_name, stock: row.car_stock },
+    vehicleClass: row.vehicle_class,
+    templateVersion: row.template_version,
+    conditions: { trackType: row.track_type, temperatureC: row.temperature_c, grip: row.grip },
+    notesMarkdown: row.notes_md,
+    notesHtml: renderMarkdown(row.notes_md),
+    currentRevision: {
+      id: current.id,
+      number: current.number,
+      values: current.values,
+      changeNote: current.note_hidden && !(seesHiddenNotes || viewer?.id === current.author_id) ? '' : current.change_note,
+      createdAt: new Date(current.created_at).toISOString(),
+    },
     revisions: revisions.map((r, i) => ({
       id: r.id,
       number: r.number,
-      changeNote: hides.revisionIds.has(r.id) && !(seesHidden || viewer?.id === r.authorId) ? '' : r.changeNote,
-      noteHidden: hides.revisionIds.has(r.id),
-      authorHandle: r.author?.handle ?? '',
-      createdAt: r.createdAt.toISOString(),
+      changeNote: r.note_hidden && !(seesHiddenNotes || viewer?.id === r.author_id) ? '' : r.change_note,
+      noteHidden: r.note_hidden,
+      authorHandle: r.author_handle,
+      createdAt: new Date(r.created_at).toISOString(),
       changedFieldCount: revisions[i + 1] ? diffSetupValues(revisions[i + 1].values, r.values).length : 0,
     })),
-    photos: await listSetupPhotos(db, setup.id),
-    ...(await lineageAndComments(db, setup, viewer)),
-    hidden: hides.setup,
-    createdAt: setup.createdAt.toISOString(),
-    updatedAt: setup.updatedAt.toISOString(),
+    photos: row.photos.map((p) => ({
+      id: p.id,
+      ...photoUrls({ storageKey: p.storage_key, thumbKey: p.thumb_key }),
+      width: p.width,
+      height: p.height,
+      caption: p.caption,
+    })),
+    lineage: { forkedFrom: forkedFromOf(row, viewer), forkCount: row.fork_count, familyForkCount: row.family_fork_count },
+    commentCount: row.comment_count,
+    hidden: row.hide_at
+      ? { hiddenAt: row.hide_at.toISOString(), reason: row.hide_reason ?? '', autoHidden: row.hide_auto ?? false, actionId: row.hide_auto ? null : row.hide_action_id }
+      : null,
+    createdAt: row.created_at.toISOString(),
+    updatedAt: row.updated_at.toISOString(),
   };
 }
 
@@ -172,6 +214,7 @@ export async function getSetupDetail(db: Database, id: number, viewer: Viewer, s
 export async function updateSetupMeta(db: Database, owner: User, id: number, input: SetupMetaUpdate): Promise<Setup> {
   const setup = await findOwnSetup(db, owner.id, id);
   const { conditions, notesMarkdown, ...rest } = setupMetaUpdateSchema.parse(input);
+  await assertNewAccountMayPost(db, owner, { kind: 'text', texts: { notesMarkdown } });
   return setup.update({ ...rest, ...conditionColumns(conditions), ...(notesMarkdown !== undefined ? { notesMd: notesMarkdown } : {}) });
 }
 

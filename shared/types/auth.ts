@@ -1,3 +1,4 @@
+import { hiddenNoticeSchema } from './moderation';
 import { vehicleClassKeySchema } from './vehicleClasses';
 import { z } from './zod';
 import { COMMON_PASSWORDS } from './commonPasswords';
@@ -105,6 +106,8 @@ export const passwordChangeRequestSchema = z.object({
 
 /** A racer's public page, GET /api/racers/:handle. `bioHtml` is rendered and cleaned on the server. */
 export const publicRacerSchema = z.object({
+  /** The account's id: what a report of this racer's profile names. */
+  id: z.number().int(),
   handle: z.string(),
   displayName: z.string(),
   bioHtml: z.string(),
@@ -112,6 +115,11 @@ export const publicRacerSchema = z.object({
   homeTrack: z.string(),
   classesRaced: z.array(vehicleClassKeySchema),
   role: roleSchema,
+  /**
+   * Set when moderators hid this profile, and only for the racer and moderators (others get an
+   * empty bio instead). Absent or null otherwise.
+   */
+  hidden: hiddenNoticeSchema.nullable().optional(),
 });
 export type PublicRacer = z.infer<typeof publicRacerSchema>;
 export const publicRacerResponseSchema = z.object({ racer: publicRacerSchema });

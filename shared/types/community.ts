@@ -18,6 +18,8 @@ export const NOTIFICATION_TYPES = [
   'setup-forked',
   'original-changed',
   'report-outcome',
+  /** What moderators did to my content or account (hidden, restored, warned, suspended, appeal decided). */
+  'moderation-notice',
 ] as const;
 export const notificationTypeSchema = z.enum(NOTIFICATION_TYPES);
 export type NotificationType = z.infer<typeof notificationTypeSchema>;
@@ -261,6 +263,7 @@ export const EMAIL_TYPE_LABELS: Record<NotificationType, string> = {
   'setup-forked': 'Forks of my setups',
   'original-changed': 'Changes to setups I forked from',
   'report-outcome': 'Outcomes of my reports',
+  'moderation-notice': 'Moderators’ decisions about my content',
 };
 
 /**

@@ -1,4 +1,5 @@
 import { z } from './zod';
+import { hiddenNoticeSchema, type HiddenNotice } from './moderation';
 import { setupValueSchema, setupValuesSchema } from './setups';
 import { vehicleClassKeySchema } from './vehicleClasses';
 
@@ -198,6 +199,8 @@ export type CommentDto = {
   deleted: boolean;
   canEdit: boolean;
   canDelete: boolean;
+  /** Set only for the comment's author and moderators when moderators hid it (others never get it). */
+  hidden?: HiddenNotice | null;
   replies: CommentDto[];
 };
 const commentBase = z.object({
@@ -216,6 +219,7 @@ const commentBase = z.object({
   deleted: z.boolean(),
   canEdit: z.boolean(),
   canDelete: z.boolean(),
+  hidden: hiddenNoticeSchema.nullable().optional(),
 });
 export const commentSchema: z.ZodType<CommentDto> = commentBase.extend({
   replies: z.array(z.lazy(() => commentSchema)),

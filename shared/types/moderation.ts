@@ -42,6 +42,8 @@ export const reportCreateSchema = z
     targetId: z.number({ error: 'targetId must be a number.' }).int().positive(),
     reason: reportReasonSchema,
     note: z.string().trim().max(REPORT_NOTE_MAX, `Keep the note under ${REPORT_NOTE_MAX} characters.`).default(''),
+    /** The share token of an unlisted setup the reporter opened through its link (for it, its changes, comments, photos). */
+    share: z.string().max(100).optional(),
   })
   .refine((r) => r.reason !== 'other' || r.note.length > 0, {
     path: ['note'],
@@ -214,6 +216,8 @@ export const queueItemSchema = z.object({
   canAct: z.boolean(),
   /** Why not, in words, when canAct is false. */
   cannotActReason: z.string().nullable(),
+  /** Whether the signed-in moderator may suspend this author (only admins suspend moderators and admins). */
+  canSuspend: z.boolean().optional(),
 });
 export type QueueItem = z.infer<typeof queueItemSchema>;
 
@@ -235,6 +239,30 @@ export const appealCreateSchema = z.strictObject({
   actionId: z.number().int().positive(),
   text: z.string().trim().min(1, 'Say why the decision should change.').max(APPEAL_TEXT_MAX),
 });
+
+/**
+ * `POST /api/appeals/suspension` (no session: a suspended racer cannot sign in) → 201 `{ appeal: MyAppeal }`.
+ * `appealToken` comes from the `account_suspended` sign-in refusal's details; it lasts an hour.
+ */
+export const suspensionAppealCreateSchema = z.strictObject({
+  appealToken: z.string().trim().min(1, 'The appeal form has no token: sign in again to get one.').max(600),
+  text: z.string().trim().min(1, 'Say why the decision should change.').max(APPEAL_TEXT_MAX),
+});
+
+/** The details of a `403 account_suspended` sign-in refusal (the password was right). */
+export const suspendedSignInDetailsSchema = z.object({
+  until: z.string().nullable(),
+  reason: z.string().nullable(),
+  /** The suspension being served; null when no moderation action recorded it. */
+  suspensionActionId: z.number().int().nullable().optional(),
+  /** Signed, short-lived: lets the racer appeal without a session. Absent when an appeal is no longer possible. */
+  appealToken: z.string().optional(),
+  /** When the appeal token stops working (ISO). */
+  appealTokenExpiresAt: z.string().optional(),
+  /** Why no appeal is possible (already appealed, window closed), when that is the case. */
+  cannotAppealReason: z.string().nullable().optional(),
+});
+export type SuspendedSignInDetails = z.infer<typeof suspendedSignInDetailsSchema>;
 
 /** `POST /api/moderation/appeals/:id/decide` → `{ appeal: MyAppeal }`. */
 export const appealDecisionSchema = z.strictObject({
@@ -320,6 +348,8 @@ export const NEW_ACCOUNT_LIMITS = {
 export const AUTO_HIDE_REPORTERS = 3;
 export const AUTO_HIDE_REPORTER_MIN_AGE_DAYS = 7;
 export const REPORTS_PER_HOUR = 10;
+/** The error code of every new-account limit refusal (429 counts, 422 links, 403 photos). */
+export const NEW_ACCOUNT_LIMIT_CODE = 'new_account_limit';
 
 /** `GET /api/me/limits`: what applies to me now and when it lifts; `limited: false` means none. */
 export const myLimitsSchema = z.object({

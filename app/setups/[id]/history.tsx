@@ -1,4 +1,6 @@
 import { router, useLocalSearchParams } from 'expo-router';
+import { MyLimitsNotice } from '../../../components/MyLimitsNotice';
+import { commentReport, ReportControl } from '../../../components/ReportControl';
 import { RevisionChangesEntry, type HistoryRevision } from '../../../components/RevisionChangesEntry';
 import { SetupPageFrame } from '../../../components/SetupPageFrame';
 import { EmptyState, ErrorState, LoadingState } from '../../../components/StatusViews';
@@ -81,11 +83,13 @@ export default function SetupHistoryScreen() {
     if (comment.revisionId !== null) byRevision.set(comment.revisionId, [...(byRevision.get(comment.revisionId) ?? []), comment]);
   }
   const signedIn = me.isPending ? undefined : Boolean(me.data);
+  const hiddenNotes = new Set(setup.data.revisions.filter((r) => r.noteHidden).map((r) => r.id));
   return (
     <SetupPageFrame title={`History of ${setup.data.title}`} back={back}>
       {comments.isError ? (
         <ErrorState title="The comments could not load" message={comments.error.message} onRetry={() => void comments.refetch()} />
       ) : null}
+      {signedIn ? <MyLimitsNotice focus="comments" /> : null}
       {revisions.length === 0 ? (
         <EmptyState title="No revisions yet" message="Each time the sheet is saved with a change note, the change shows up here." />
       ) : (
@@ -102,6 +106,13 @@ export default function SetupHistoryScreen() {
             signedIn={signedIn}
             signInHref={signInHref(withShare(`/setups/${id}/history`, share))}
             compareLinks={compareLinks(id, revisions, i, share)}
+            noteHidden={hiddenNotes.has(revision.id)}
+            reportNote={
+              revision.changeNote ? (
+                <ReportControl target={{ type: 'revision', id: revision.id }} ownerHandle={revision.authorHandle} what={`the change note of revision ${revision.number}`} />
+              ) : null
+            }
+            reportComment={commentReport}
           />
         ))
       )}

@@ -1,10 +1,13 @@
 import { router, useLocalSearchParams } from 'expo-router';
 import { useState } from 'react';
 import { EditorSavedNotice } from '../../../components/EditorSavedNotice';
+import { HiddenNoticeBanner } from '../../../components/HiddenNoticeBanner';
 import { LineageCard } from '../../../components/LineageCard';
+import { NewAccountLimitsNotice } from '../../../components/NewAccountLimitsNotice';
 import { PhotoGallery } from '../../../components/PhotoGallery';
 import { PhotoUploader } from '../../../components/PhotoUploader';
 import { PhotoViewer } from '../../../components/PhotoViewer';
+import { ReportControl } from '../../../components/ReportControl';
 import { RevisionList } from '../../../components/RevisionList';
 import { SafetyNote } from '../../../components/SafetyNote';
 import { SetupActions } from '../../../components/SetupActions';
@@ -23,6 +26,7 @@ import { signInHref, useMeQuery } from '../../../hooks/auth';
 import { useSavedRevisionNotice } from '../../../hooks/editor';
 import { describeError } from '../../../hooks/form';
 import { useUpstreamQuery } from '../../../hooks/forks';
+import { useMyLimitsQuery } from '../../../hooks/reports';
 import { shareLinkFor, useDisplayUnits, usePhotoUpload } from '../../../hooks/garageUi';
 import { useDeleteSetup, useDeleteSetupPhoto, useUpdateSetupMeta } from '../../../hooks/setups';
 import { MAX_PHOTOS_PER_SETUP, type Photo, type SetupDetail } from '../../../shared/types/setups';
@@ -50,7 +54,12 @@ function Photos({ setup }: { setup: SetupDetail }) {
   const [open, setOpen] = useState<Photo | null>(null);
   const upload = usePhotoUpload(setup.id);
   const remove = useDeleteSetupPhoto(setup.id);
-  const uploader = !setup.isOwner ? undefined : setup.photos.length >= MAX_PHOTOS_PER_SETUP ? null : (
+  const limits = useMyLimitsQuery(setup.isOwner);
+  // New accounts add photos once their e-mail is verified: say so before they pick a file.
+  const barred = limits.data?.limited && !limits.data.photosAllowed ? limits.data : null;
+  const uploader = !setup.isOwner ? undefined : setup.photos.length >= MAX_PHOTOS_PER_SETUP ? null : barred ? (
+    <NewAccountLimitsNotice limits={barred} focus="photos" />
+  ) : (
     <PhotoUploader
       onPick={(file, caption) => upload.start(file, caption || undefined)}
       progress={upload.progress}
@@ -70,6 +79,7 @@ function Photos({ setup }: { setup: SetupDetail }) {
         onDelete={setup.isOwner && open ? () => remove.mutate(open.id, { onSuccess: () => setOpen(null) }) : undefined}
         deleting={remove.isPending}
         deleteError={messageOf(remove.error)}
+        report={open ? <ReportControl target={{ type: 'photo', id: open.id }} ownerHandle={setup.owner.handle} what="this photo" /> : null}
       />
     </>
   );
@@ -117,6 +127,7 @@ function SetupBody({ setup, share }: { setup: SetupDetail; share?: string }) {
   );
   return (
     <>
+      {setup.hidden ? <HiddenNoticeBanner notice={setup.hidden} what="setup" isAuthor={setup.isOwner} /> : null}
       {saved.notice ? <EditorSavedNotice notice={saved.notice} onDismiss={saved.dismiss} /> : null}
       <UpstreamBanner setup={setup} />
       <SetupOverview setup={setup} units={units} />
@@ -130,6 +141,7 @@ function SetupBody({ setup, share }: { setup: SetupDetail; share?: string }) {
         onDelete={() => remove.mutate(undefined, { onSuccess: () => router.replace('/garage') })}
         deleting={remove.isPending}
         deleteError={messageOf(remove.error)}
+        report={<ReportControl target={{ type: 'setup', id: setup.id }} ownerHandle={setup.owner.handle} what="this setup" />}
       />
       {/* Phones read top to bottom: figures first, then the sheet; wide screens put them side by side. */}
       <SetupColumns
