@@ -7,6 +7,7 @@ import { AppText } from './AppText';
 import { Button } from './Button';
 import { CommentForm } from './CommentForm';
 import { FormErrorBanner } from './FormErrorBanner';
+import { HiddenNoticeBanner } from './HiddenNoticeBanner';
 import { HtmlContent } from './HtmlContent';
 import { formatDay } from './SetupSheetFormat';
 import { TextLink } from './TextLink';
@@ -114,6 +115,10 @@ export function CommentItem(props: CommentItemProps) {
   return (
     <View role="listitem" style={[styles.item, ruled ? { borderTopWidth: 1, borderColor: colors.border } : null]}>
       <Meta comment={comment} now={now} />
+      {comment.hidden && !comment.deleted ? (
+        // Only the author and moderators receive the notice; the author is the one given the text to edit.
+        <HiddenNoticeBanner notice={comment.hidden} what="comment" isAuthor={comment.bodyMarkdown !== ''} />
+      ) : null}
       {comment.deleted ? (
         <AppText tone="muted" style={styles.deleted}>
           This comment was deleted.

@@ -56,6 +56,23 @@ describe('CommentThread', () => {
     expect(screen.getByText('Bumpy back straight.')).toBeTruthy();
   });
 
+  it('tells the author a hidden comment is hidden, why, and how to appeal; a moderator gets no appeal link', () => {
+    const hidden = { hiddenAt: '2026-12-01T12:00:00.000Z', reason: 'Shop link in every comment.', autoHidden: false, actionId: 31 };
+    renderThread([comment({ id: 1, bodyMarkdown: 'Cheap bushings here', hidden })]);
+    expect(screen.getByText('Hidden by moderators')).toBeTruthy();
+    expect(screen.getByText(/Shop link in every comment\./)).toBeTruthy();
+    expect(screen.getByText(/Only you and the moderators can see this comment/)).toBeTruthy();
+    expect(screen.getByText(/You can appeal once, within 20 days/)).toBeTruthy();
+  });
+
+  it('shows a moderator the hidden notice on someone else’s comment without offering them the appeal', () => {
+    const hidden = { hiddenAt: '2026-12-01T12:00:00.000Z', reason: 'Shop link in every comment.', autoHidden: false, actionId: 31 };
+    renderThread([comment({ id: 1, hidden })]);
+    expect(screen.getByText('Hidden by moderators')).toBeTruthy();
+    expect(screen.getByText(/Only its author and the moderators can see this comment/)).toBeTruthy();
+    expect(screen.queryByText(/You can appeal/)).toBeNull();
+  });
+
   it('shows a deleted comment as deleted, without its words or actions, and keeps its replies', () => {
     renderThread([
       comment({
