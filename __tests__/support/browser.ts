@@ -1,5 +1,5 @@
 import AxeBuilder from '@axe-core/playwright';
-import { chromium, type Browser, type BrowserContext, type Page } from 'playwright-core';
+import { chromium, type APIRequestContext, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from './chromium';
 
 export const VIEWPORTS = {
@@ -53,4 +53,15 @@ export async function seriousAccessibilityViolations(page: Page): Promise<string
   return results.violations
     .filter((v) => v.impact === 'serious' || v.impact === 'critical')
     .map((v) => `${v.id} (${v.impact}): ${v.help} — ${v.nodes.map((n) => n.target.join(' ')).slice(0, 3).join(', ')}`);
+}
+
+/**
+ * Signs a browser context in through the API (its cookies then carry the session into the page);
+ * returns the new session's CSRF token for further API calls from the test.
+ */
+export async function signInThroughApi(request: APIRequestContext, baseUrl: string, login: string, password: string): Promise<string> {
+  const { csrfToken } = await (await request.get(`${baseUrl}/api/auth/csrf`)).json();
+  const res = await request.post(`${baseUrl}/api/auth/sign-in`, { data: { login, password }, headers: { 'X-CSRF-Token': csrfToken } });
+  if (!res.ok()) throw new Error(`sign-in as ${login} failed: ${res.status()} ${await res.text()}`);
+  return (await res.json()).csrfToken as string;
 }
