@@ -9,6 +9,9 @@
 const tsJest = ['ts-jest', { tsconfig: 'tsconfig.server.json', diagnostics: { warnOnly: false } }];
 
 module.exports = {
+  // Hooks and tests may wait on a database reset or a server start while the other half of the run
+  // (scripts/test.sh runs two jest processes side by side) keeps both cores busy.
+  testTimeout: 30_000,
   projects: [
     {
       displayName: 'shared',

@@ -1,17 +1,24 @@
-// Reads jest's --json results and prints the closing line CI reads: "N passed, N failed".
+// Reads jest's --json results (one file per jest process) and prints the closing line CI reads:
+// "N passed, N failed".
 const fs = require('node:fs');
 
-const file = process.argv[2];
-if (!file || !fs.existsSync(file)) {
-  console.error('no jest results were written; the run stopped before any test finished');
+const files = process.argv.slice(2);
+const missing = files.length === 0 ? ['(none given)'] : files.filter((file) => !fs.existsSync(file));
+if (missing.length > 0) {
+  console.error(`no jest results were written (${missing.join(', ')}); a run stopped before any test finished`);
   console.log('0 passed, 1 failed');
   process.exit(1);
 }
-const results = JSON.parse(fs.readFileSync(file, 'utf8'));
-const failedSuites = results.numFailedTestSuites ?? 0;
-// A suite that failed to load counts as a failure even though none of its tests ran.
-const failed = results.numFailedTests + (results.numRuntimeErrorTestSuites ?? 0);
-const skipped = results.numPendingTests + (results.numTodoTests ?? 0);
-console.log(`suites: ${results.numPassedTestSuites} passed, ${failedSuites} failed`);
-console.log(`${results.numPassedTests} passed, ${failed} failed${skipped ? `, ${skipped} skipped` : ''}`);
-process.exit(failed > 0 || results.numPassedTests === 0 ? 1 : 0);
+const total = { passedSuites: 0, failedSuites: 0, passed: 0, failed: 0, skipped: 0 };
+for (const file of files) {
+  const results = JSON.parse(fs.readFileSync(file, 'utf8'));
+  total.passedSuites += results.numPassedTestSuites;
+  total.failedSuites += results.numFailedTestSuites ?? 0;
+  total.passed += results.numPassedTests;
+  // A suite that failed to load counts as a failure even though none of its tests ran.
+  total.failed += results.numFailedTests + (results.numRuntimeErrorTestSuites ?? 0);
+  total.skipped += results.numPendingTests + (results.numTodoTests ?? 0);
+}
+console.log(`suites: ${total.passedSuites} passed, ${total.failedSuites} failed`);
+console.log(`${total.passed} passed, ${total.failed} failed${total.skipped ? `, ${total.skipped} skipped` : ''}`);
+process.exit(total.failed > 0 || total.passed === 0 ? 1 : 0);

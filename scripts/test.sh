@@ -17,8 +17,11 @@ chmod 755 "$TMP"
 PG_DIR="$TMP/pg"
 PG_PORT="$(free_port)"
 
+HEALTH_DIR="$TMP/pg-health"
+
 cleanup() {
   pg_stop "$PG_DIR"
+  pg_stop "$HEALTH_DIR"
   rm -rf "$TMP"
 }
 trap cleanup EXIT
@@ -32,12 +35,21 @@ log "test PostgreSQL on 127.0.0.1:$PG_PORT"
 export NODE_ENV=test
 export DATABASE_URL="postgres://tunefork@127.0.0.1:$PG_PORT/tunefork_test"
 export TUNEFORK_E2E_DATABASE_URL="postgres://tunefork@127.0.0.1:$PG_PORT/tunefork_e2e"
-export TUNEFORK_TEST_PGDATA="$PG_DIR"
-export TUNEFORK_TEST_PGPORT="$PG_PORT"
+# The health test stops and restarts its database to see the 503: it gets a cluster of its own so
+# the other tests running beside it keep theirs.
+HEALTH_PORT="$(free_port)"
+pg_init "$HEALTH_DIR"
+pg_start "$HEALTH_DIR" "$HEALTH_PORT"
+pg_create_db "$HEALTH_PORT" tunefork_health
+export TUNEFORK_TEST_PGDATA="$HEALTH_DIR"
+export TUNEFORK_TEST_PGPORT="$HEALTH_PORT"
+export TUNEFORK_HEALTH_DATABASE_URL="postgres://tunefork@127.0.0.1:$HEALTH_PORT/tunefork_health"
 # Photo files of the seeded e2e world; the e2e server reads them from the same folder.
 export TUNEFORK_E2E_DATA_DIR="$TMP/e2e-data"
 
 ./node_modules/.bin/tsx server/db/cli.ts migrate >/dev/null || die "migrations failed on the test database"
+DATABASE_URL="$TUNEFORK_HEALTH_DATABASE_URL" ./node_modules/.bin/tsx server/db/cli.ts migrate >/dev/null \
+  || die "migrations failed on the health test's database"
 DATABASE_URL="$TUNEFORK_E2E_DATABASE_URL" ./node_modules/.bin/tsx server/db/cli.ts migrate >/dev/null \
   || die "migrations failed on the e2e database"
 DATABASE_URL="$TUNEFORK_E2E_DATABASE_URL" DATA_DIR="$TUNEFORK_E2E_DATA_DIR" ./node_modules/.bin/tsx server/db/cli.ts seed >/dev/null \
@@ -53,10 +65,31 @@ if [ -z "${TUNEFORK_SKIP_TYPECHECK:-}" ]; then
   [ "$TYPECHECK" = 0 ] || log "type errors above: the run will fail"
 fi
 
+# jest runs each project's files one at a time (they share a database). With no arguments, two
+# jest processes run side by side, one per core: shared logic and the API on the test database;
+# the components and the browser journeys (their servers on the e2e database). Each line of output
+# is marked with its half.
+run_half() {
+  local name="$1"; shift
+  ./node_modules/.bin/jest --ci --runInBand --json --outputFile="$TMP/results-$name.json" "$@" 2>&1 | sed -u "s/^/[$name] /"
+  return "${PIPESTATUS[0]}"
+}
 START=$(date +%s)
-./node_modules/.bin/jest --ci --runInBand --json --outputFile="$TMP/results.json" "$@"
-STATUS=$?
+if [ $# -eq 0 ]; then
+  run_half api --selectProjects shared server &
+  API=$!
+  run_half ui --selectProjects client e2e &
+  UI=$!
+  STATUS=0
+  wait "$API" || STATUS=1
+  wait "$UI" || STATUS=1
+  RESULTS=("$TMP/results-api.json" "$TMP/results-ui.json")
+else
+  ./node_modules/.bin/jest --ci --runInBand --json --outputFile="$TMP/results.json" "$@"
+  STATUS=$?
+  RESULTS=("$TMP/results.json")
+fi
 log "jest took $(( $(date +%s) - START )) s"
-node scripts/summarize-tests.js "$TMP/results.json" || STATUS=1
+node scripts/summarize-tests.js "${RESULTS[@]}" || STATUS=1
 [ "$TYPECHECK" = 0 ] || { log "type-check failed"; STATUS=1; }
 exit $STATUS

@@ -1,30 +1,19 @@
 import type { Browser } from 'playwright-core';
-import { launchBrowser, openWatchedPage, seriousAccessibilityViolations, VIEWPORTS } from '../support/browser';
-import { startServer, type RunningServer } from '../support/server';
+import { openWatchedPage, seriousAccessibilityViolations, useServerAndBrowser, VIEWPORTS } from '../support/browser';
 
 jest.setTimeout(180_000);
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const world = useServerAndBrowser();
 
 it('signs up, confirms the address from the dev mailbox, signs out and signs back in (phone)', async () => {
-  const w = await openWatchedPage(browser, VIEWPORTS.phone);
+  const w = await openWatchedPage(world.browser, VIEWPORTS.phone);
   const { page } = w;
   const stamp = Date.now().toString(36);
   const handle = `e2e-${stamp}`;
   const email = `e2e.${stamp}@racers.example`;
   const password = 'front-toe-out-one-degree';
 
-  await page.goto(`${server.baseUrl}/sign-up`);
+  await page.goto(`${world.server.baseUrl}/sign-up`);
   await page.getByRole('heading', { level: 1 }).waitFor();
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
   await page.getByLabel('Handle').fill(handle);
@@ -34,7 +23,7 @@ it('signs up, confirms the address from the dev mailbox, signs out and signs bac
   await page.getByRole('button', { name: 'Create account' }).click();
   await page.waitForURL((url) => url.pathname !== '/sign-up');
 
-  await page.goto(`${server.baseUrl}/dev/mailbox`);
+  await page.goto(`${world.server.baseUrl}/dev/mailbox`);
   const message = page.getByRole('link', { name: new RegExp(`Confirm your e-mail address for Tunefork, to .*${email}`) });
   await message.first().waitFor();
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
@@ -46,17 +35,17 @@ it('signs up, confirms the address from the dev mailbox, signs out and signs bac
   await page.getByText(/confirmed/i).first().waitFor();
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
 
-  await page.goto(`${server.baseUrl}/profile`);
+  await page.goto(`${world.server.baseUrl}/profile`);
   await page.getByText(`@${handle}`).first().waitFor();
   await page.getByRole('button', { name: 'Sign out', exact: true }).click();
   await page.getByRole('link', { name: 'Sign in' }).first().waitFor();
 
-  await page.goto(`${server.baseUrl}/sign-in`);
+  await page.goto(`${world.server.baseUrl}/sign-in`);
   await page.getByLabel('E-mail or handle').fill(email);
   await page.getByLabel('Password', { exact: true }).fill(password);
   await page.getByRole('button', { name: 'Sign in', exact: true }).click();
   await page.waitForURL((url) => url.pathname !== '/sign-in');
-  await page.goto(`${server.baseUrl}/profile`);
+  await page.goto(`${world.server.baseUrl}/profile`);
   await page.getByText(`@${handle}`).first().waitFor();
   expect(w.consoleErrors).toEqual([]);
   expect(await w.cspViolations()).toEqual([]);
@@ -64,9 +53,9 @@ it('signs up, confirms the address from the dev mailbox, signs out and signs bac
 });
 
 it('continues with GitHub through the local provider\u2019s consent page and back (wide)', async () => {
-  const w = await openWatchedPage(browser, VIEWPORTS.wide);
+  const w = await openWatchedPage(world.browser, VIEWPORTS.wide);
   const { page } = w;
-  await page.goto(`${server.baseUrl}/sign-in`);
+  await page.goto(`${world.server.baseUrl}/sign-in`);
   await page.getByRole('button', { name: 'Continue with GitHub' }).click();
   await page.waitForURL((url) => url.pathname === '/fake-github/login/oauth/authorize');
   await page.getByLabel('Login', { exact: true }).fill('e2e-gh-racer');
@@ -74,8 +63,8 @@ it('continues with GitHub through the local provider\u2019s consent page and bac
   await page.getByLabel('E-mail', { exact: true }).fill('browser.racer@racers.example');
   await page.getByLabel('Another account:').check();
   await page.getByRole('button', { name: 'Authorize Tunefork' }).click();
-  await page.waitForURL((url) => url.origin === server.baseUrl && !url.pathname.startsWith('/fake-github') && !url.pathname.startsWith('/api'));
-  await page.goto(`${server.baseUrl}/profile`);
+  await page.waitForURL((url) => url.origin === world.server.baseUrl && !url.pathname.startsWith('/fake-github') && !url.pathname.startsWith('/api'));
+  await page.goto(`${world.server.baseUrl}/profile`);
   await page.getByText('@e2e-gh-racer').first().waitFor();
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
   expect(w.consoleErrors).toEqual([]);

@@ -1,41 +1,17 @@
-import type { APIRequestContext, Browser, Page } from 'playwright-core';
-import { launchBrowser, openWatchedPage, seriousAccessibilityViolations, VIEWPORTS } from '../support/browser';
-import { startServer, type RunningServer } from '../support/server';
+import { expectAccessible, openWatchedPage, useServerAndBrowser, VIEWPORTS } from '../support/browser';
 
 jest.setTimeout(300_000);
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-/** Signs a browser context in through the API; returns the CSRF token of the new session. */
-async function signIn(request: APIRequestContext, login: string, password: string): Promise<string> {
-  const { csrfToken } = await (await request.get(`${server.baseUrl}/api/auth/csrf`)).json();
-  const res = await request.post(`${server.baseUrl}/api/auth/sign-in`, { data: { login, password }, headers: { 'X-CSRF-Token': csrfToken } });
-  expect(res.ok()).toBe(true);
-  return (await res.json()).csrfToken;
-}
-
-async function expectAccessible(page: Page): Promise<void> {
-  expect(await seriousAccessibilityViolations(page)).toEqual([]);
-}
+const world = useServerAndBrowser();
 
 it('a racer follows another on a phone, sees their new revision in the feed, and the followed racer is told (wide)', async () => {
-  const pell = await openWatchedPage(browser, VIEWPORTS.phone);
+  const pell = await openWatchedPage(world.browser, VIEWPORTS.phone);
   const { page } = pell;
-  const pellCsrf = await signIn(page.request, 'pell-strand', 'brackwater-ruts-9');
+  const pellCsrf = await world.signIn(page.request, 'pell-strand', 'brackwater-ruts-9');
   // Start from not following, whatever other journeys did.
-  await page.request.delete(`${server.baseUrl}/api/racers/oskar-velde/follow`, { headers: { 'X-CSRF-Token': pellCsrf } });
+  await page.request.delete(`${world.server.baseUrl}/api/racers/oskar-velde/follow`, { headers: { 'X-CSRF-Token': pellCsrf } });
 
-  await page.goto(`${server.baseUrl}/racers/oskar-velde`);
+  await page.goto(`${world.server.baseUrl}/racers/oskar-velde`);
   await page.getByRole('heading', { name: 'Oskar Velde', level: 1 }).waitFor();
   await page.getByRole('button', { name: 'Follow @oskar-velde' }).click();
   await page.getByRole('button', { name: 'Following @oskar-velde. Press to unfollow' }).waitFor();
@@ -44,13 +20,13 @@ it('a racer follows another on a phone, sees their new revision in the feed, and
   await expectAccessible(page);
 
   // Oskar saves a change to one of his public setups.
-  const oskar = await openWatchedPage(browser, VIEWPORTS.wide);
-  const oskarCsrf = await signIn(oskar.page.request, 'oskar-velde', 'saltmarsh-marshal-4');
-  const garage = await (await oskar.page.request.get(`${server.baseUrl}/api/garage`)).json();
+  const oskar = await openWatchedPage(world.browser, VIEWPORTS.wide);
+  const oskarCsrf = await world.signIn(oskar.page.request, 'oskar-velde', 'saltmarsh-marshal-4');
+  const garage = await (await oskar.page.request.get(`${world.server.baseUrl}/api/garage`)).json();
   const published = garage.cars.flatMap((c: { setups: Array<{ id: number; visibility: string }> }) => c.setups).find((s: { visibility: string }) => s.visibility === 'public');
-  const setup = (await (await oskar.page.request.get(`${server.baseUrl}/api/setups/${published.id}`)).json()).setup;
+  const setup = (await (await oskar.page.request.get(`${world.server.baseUrl}/api/setups/${published.id}`)).json()).setup;
   const note = `Pinion up one tooth for the long straight (${Date.now()})`;
-  const saved = await oskar.page.request.post(`${server.baseUrl}/api/setups/${setup.id}/revisions`, {
+  const saved = await oskar.page.request.post(`${world.server.baseUrl}/api/setups/${setup.id}/revisions`, {
     headers: { 'X-CSRF-Token': oskarCsrf },
     data: { baseRevisionId: setup.currentRevision.id, values: { ...setup.currentRevision.values, 'shock.rear.oil': (setup.currentRevision.values['shock.rear.oil'] as number) + 25 }, changeNote: note },
   });
@@ -70,7 +46,7 @@ it('a racer follows another on a phone, sees their new revision in the feed, and
   await expectAccessible(page);
 
   // Oskar's bell counts the new follower; the list says who, and "mark all read" clears the count.
-  await oskar.page.goto(`${server.baseUrl}/activity`);
+  await oskar.page.goto(`${world.server.baseUrl}/activity`);
   const bell = oskar.page.getByRole('link', { name: /^Notifications, \d+ unread$/ });
   await bell.click();
   await oskar.page.waitForURL((url) => url.pathname === '/notifications');

@@ -1,40 +1,16 @@
-import type { APIRequestContext, Browser, Page } from 'playwright-core';
-import { launchBrowser, openWatchedPage, seriousAccessibilityViolations, VIEWPORTS } from '../support/browser';
-import { startServer, type RunningServer } from '../support/server';
+import { expectAccessible, openWatchedPage, useServerAndBrowser, VIEWPORTS } from '../support/browser';
 
 jest.setTimeout(300_000);
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-/** Signs a browser context in through the API; returns the CSRF token of the new session. */
-async function signIn(request: APIRequestContext, login: string, password: string): Promise<string> {
-  const { csrfToken } = await (await request.get(`${server.baseUrl}/api/auth/csrf`)).json();
-  const res = await request.post(`${server.baseUrl}/api/auth/sign-in`, { data: { login, password }, headers: { 'X-CSRF-Token': csrfToken } });
-  expect(res.ok()).toBe(true);
-  return (await res.json()).csrfToken;
-}
-
-async function expectAccessible(page: Page): Promise<void> {
-  expect(await seriousAccessibilityViolations(page)).toEqual([]);
-}
+const world = useServerAndBrowser();
 
 it('a newcomer forks a demo setup for their stock kit, takes one of two later changes from the original, and comments on it (phone)', async () => {
-  const rafi = await openWatchedPage(browser, VIEWPORTS.phone);
+  const rafi = await openWatchedPage(world.browser, VIEWPORTS.phone);
   const { page } = rafi;
-  await signIn(page.request, 'rafi_new', 'first-season-stoat-8e');
+  await world.signIn(page.request, 'rafi_new', 'first-season-stoat-8e');
 
   // Find the demo setup from the kit: Discover → the kit's page → the setup.
-  await page.goto(`${server.baseUrl}/`);
+  await page.goto(`${world.server.baseUrl}/`);
   await page.getByRole('link', { name: /Ottervale Kitworks Stoat 8E/ }).click();
   await page.waitForURL((url) => /^\/kits\/\d+$/.test(url.pathname));
   await page.getByRole('heading', { name: /Stoat 8E/, level: 1 }).waitFor();
@@ -62,16 +38,16 @@ it('a newcomer forks a demo setup for their stock kit, takes one of two later ch
   await page.getByRole('link', { name: /Forked from “Hollow Pines — loose and dusty” by @juno_braithwick \(revision \d+\)/ }).waitFor();
   await expectAccessible(page);
 
-  const fork = (await (await page.request.get(`${server.baseUrl}/api/setups/${forkId}`)).json()).setup;
+  const fork = (await (await page.request.get(`${world.server.baseUrl}/api/setups/${forkId}`)).json()).setup;
   expect(fork.currentRevision.values['chassis.rear-brace']).not.toBe('stiff');
   expect(fork.currentRevision.values['body.style']).toBe('high-downforce');
   expect(fork.currentRevision.changeNote).toMatch(/Rear chassis brace/);
 
   // The original's owner changes two things.
-  const juno = await browser.newContext();
-  const junoCsrf = await signIn(juno.request, 'juno_braithwick', 'hollow-pines-laps-2');
-  const original = (await (await juno.request.get(`${server.baseUrl}/api/setups/${originalId}`)).json()).setup;
-  const saved = await juno.request.post(`${server.baseUrl}/api/setups/${originalId}/revisions`, {
+  const juno = await world.browser.newContext();
+  const junoCsrf = await world.signIn(juno.request, 'juno_braithwick', 'hollow-pines-laps-2');
+  const original = (await (await juno.request.get(`${world.server.baseUrl}/api/setups/${originalId}`)).json()).setup;
+  const saved = await juno.request.post(`${world.server.baseUrl}/api/setups/${originalId}/revisions`, {
     headers: { 'X-CSRF-Token': junoCsrf },
     data: {
       baseRevisionId: original.currentRevision.id,
@@ -83,7 +59,7 @@ it('a newcomer forks a demo setup for their stock kit, takes one of two later ch
   await juno.close();
 
   // Back on the fork: the original changed 2 fields; take only the rear shock oil.
-  await page.goto(`${server.baseUrl}${forkPath}`);
+  await page.goto(`${world.server.baseUrl}${forkPath}`);
   const banner = page.getByRole('region', { name: 'Changes in the original' });
   await banner.getByText(/changed 2 fields/).waitFor();
   await banner.getByRole('link', { name: 'Review the changes' }).click();
@@ -94,12 +70,12 @@ it('a newcomer forks a demo setup for their stock kit, takes one of two later ch
   await page.waitForURL((url) => url.pathname === forkPath);
   await page.getByText(/Saved as revision 2/).first().waitFor();
 
-  const synced = (await (await page.request.get(`${server.baseUrl}/api/setups/${forkId}`)).json()).setup;
+  const synced = (await (await page.request.get(`${world.server.baseUrl}/api/setups/${forkId}`)).json()).setup;
   expect(synced.currentRevision.values['shock.rear.oil']).toBe(400);
   expect(synced.currentRevision.values['diff.centre.oil']).toBe(fork.currentRevision.values['diff.centre.oil']);
   expect(synced.currentRevision.changeNote).toMatch(/Rear shock oil/);
   // The change not taken is still offered; the one taken is not.
-  const upstream = await (await page.request.get(`${server.baseUrl}/api/setups/${forkId}/upstream`)).json();
+  const upstream = await (await page.request.get(`${world.server.baseUrl}/api/setups/${forkId}/upstream`)).json();
   expect(upstream.rows.map((r: { key: string }) => r.key)).toEqual(['diff.centre.oil']);
 
   // Comment on that change, on the field it touched; the comment shows beside revision 2.
@@ -120,13 +96,13 @@ it('a newcomer forks a demo setup for their stock kit, takes one of two later ch
 });
 
 it('compares two revisions side by side on a wide screen, from a shareable address', async () => {
-  const w = await openWatchedPage(browser, VIEWPORTS.wide);
+  const w = await openWatchedPage(world.browser, VIEWPORTS.wide);
   const { page } = w;
-  const kits = (await (await page.request.get(`${server.baseUrl}/api/kits`)).json()).kits as Array<{ id: number; slug: string }>;
+  const kits = (await (await page.request.get(`${world.server.baseUrl}/api/kits`)).json()).kits as Array<{ id: number; slug: string }>;
   const stoat = kits.find((k) => k.slug === 'ottervale-stoat-8e')!;
-  const listed = (await (await page.request.get(`${server.baseUrl}/api/kits/${stoat.id}/setups`)).json()).setups as Array<{ id: number; title: string }>;
+  const listed = (await (await page.request.get(`${world.server.baseUrl}/api/kits/${stoat.id}/setups`)).json()).setups as Array<{ id: number; title: string }>;
   const id = listed.find((s) => s.title === 'Hollow Pines — loose and dusty')!.id;
-  await page.goto(`${server.baseUrl}/compare?a=${id}&ar=1&b=${id}&br=2`);
+  await page.goto(`${world.server.baseUrl}/compare?a=${id}&ar=1&b=${id}&br=2`);
   await page.getByRole('table').first().waitFor();
   await page.getByText('Centre diff oil').first().waitFor();
   await expectAccessible(page);

@@ -1,20 +1,9 @@
-import type { APIRequestContext, Browser, Page } from 'playwright-core';
-import { launchBrowser, openWatchedPage, seriousAccessibilityViolations, signInThroughApi, VIEWPORTS, type WatchedPage } from '../support/browser';
-import { startServer, type RunningServer } from '../support/server';
+import type { APIRequestContext, Page } from 'playwright-core';
+import { expectAccessible, openWatchedPage, useServerAndBrowser, VIEWPORTS, type WatchedPage } from '../support/browser';
 
 jest.setTimeout(180_000);
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const world = useServerAndBrowser();
 
 // The seeded demo world (server/seeders/demoModeration.ts and README's demo accounts).
 const SPAMMER = { login: 'bargain-bushings-4u', password: 'seventy-percent-off-9' };
@@ -24,17 +13,13 @@ const ADMIN = { login: 'tamsin_q', password: 'kiln-timing-desk-7' };
 
 const escapeRegExp = (text: string) => text.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
 
-async function expectAccessible(page: Page): Promise<void> {
-  expect(await seriousAccessibilityViolations(page)).toEqual([]);
-}
-
 /**
  * A spam setup the racer can see and has not reported yet. The seed hides one automatically and
  * has the racer's open reports on others, so the target is picked from what search shows her.
  */
 async function pickSpamSetup(request: APIRequestContext): Promise<{ id: number; title: string }> {
-  const search = await (await request.get(`${server.baseUrl}/api/search?q=${encodeURIComponent(SPAMMER.login)}`)).json();
-  const mine = await (await request.get(`${server.baseUrl}/api/reports/mine`)).json();
+  const search = await (await request.get(`${world.server.baseUrl}/api/search?q=${encodeURIComponent(SPAMMER.login)}`)).json();
+  const mine = await (await request.get(`${world.server.baseUrl}/api/reports/mine`)).json();
   const reported = new Set(
     (mine.reports as Array<{ targetType: string; targetId: number }>).filter((r) => r.targetType === 'setup').map((r) => r.targetId),
   );
@@ -47,7 +32,7 @@ async function pickSpamSetup(request: APIRequestContext): Promise<{ id: number; 
 
 /** The review queue showing appeals only, with the appeal about the setup in view. */
 async function openAppeal(page: Page, title: string) {
-  await page.goto(`${server.baseUrl}/moderation`);
+  await page.goto(`${world.server.baseUrl}/moderation`);
   await page.getByRole('radiogroup', { name: 'Show' }).getByRole('radio', { name: 'Appeals' }).click();
   const row = page.getByRole('article', { name: `Appeal about Setup: ${title}`, exact: true });
   await row.waitFor();
@@ -57,17 +42,17 @@ async function openAppeal(page: Page, title: string) {
 it('a racer reports a spam setup, a moderator hides it from the queue, the spammer appeals and an admin decides (phone)', async () => {
   const opened: WatchedPage[] = [];
   const open = async () => {
-    const w = await openWatchedPage(browser, VIEWPORTS.phone);
+    const w = await openWatchedPage(world.browser, VIEWPORTS.phone);
     opened.push(w);
     return w;
   };
 
   // The racer finds the spam through Discover's search and reports it.
   const racer = await open();
-  await signInThroughApi(racer.page.request, server.baseUrl, RACER.login, RACER.password);
+  await world.signIn(racer.page.request, RACER.login, RACER.password);
   const target = await pickSpamSetup(racer.page.request);
   const juno = racer.page;
-  await juno.goto(`${server.baseUrl}/`);
+  await juno.goto(`${world.server.baseUrl}/`);
   await juno.getByRole('textbox', { name: 'Search setups' }).fill(SPAMMER.login);
   await juno.getByRole('link', { name: new RegExp(`^${escapeRegExp(target.title)}\\.`) }).first().click();
   await juno.waitForURL((url) => url.pathname === `/setups/${target.id}`);
@@ -82,9 +67,9 @@ it('a racer reports a spam setup, a moderator hides it from the queue, the spamm
   // The moderator finds it in the queue and hides it with a reason of their own.
   const hideReason = 'Advertising for a parts shop with discount codes; setups here are for tuning.';
   const moderator = await open();
-  await signInThroughApi(moderator.page.request, server.baseUrl, MODERATOR.login, MODERATOR.password);
+  await world.signIn(moderator.page.request, MODERATOR.login, MODERATOR.password);
   const oskar = moderator.page;
-  await oskar.goto(`${server.baseUrl}/profile`);
+  await oskar.goto(`${world.server.baseUrl}/profile`);
   await oskar.getByRole('navigation', { name: 'Your account' }).getByRole('link', { name: 'Review queue' }).click();
   await oskar.waitForURL((url) => url.pathname === '/moderation');
   const row = oskar.getByRole('article', { name: `Setup: ${target.title}`, exact: true });
@@ -102,7 +87,7 @@ it('a racer reports a spam setup, a moderator hides it from the queue, the spamm
   await row.waitFor({ state: 'detached' });
 
   // The racer sees the outcome in plain words, without the moderator's name, and the setup is gone for her.
-  await juno.goto(`${server.baseUrl}/profile`);
+  await juno.goto(`${world.server.baseUrl}/profile`);
   await juno.getByRole('navigation', { name: 'Your account' }).getByRole('link', { name: 'My reports' }).click();
   await juno.waitForURL((url) => url.pathname === '/reports');
   const report = juno.getByRole('list', { name: 'Your reports' }).getByRole('listitem').filter({ hasText: target.title });
@@ -113,16 +98,16 @@ it('a racer reports a spam setup, a moderator hides it from the queue, the spamm
   const reportsText = await juno.getByRole('main').innerText();
   expect(reportsText).not.toMatch(/oskar/i);
   await expectAccessible(juno);
-  await juno.goto(`${server.baseUrl}/setups/${target.id}`);
+  await juno.goto(`${world.server.baseUrl}/setups/${target.id}`);
   await juno.getByText('No setup at this address').waitFor();
   expect(await juno.getByText(target.title).count()).toBe(0);
 
   // The spammer sees the banner on the setup and appeals from "Moderation of my posts".
   const appealText = 'These are real parts for this buggy; I will take the shop links out.';
   const spammer = await open();
-  await signInThroughApi(spammer.page.request, server.baseUrl, SPAMMER.login, SPAMMER.password);
+  await world.signIn(spammer.page.request, SPAMMER.login, SPAMMER.password);
   const shop = spammer.page;
-  await shop.goto(`${server.baseUrl}/setups/${target.id}`);
+  await shop.goto(`${world.server.baseUrl}/setups/${target.id}`);
   const banner = shop.getByRole('region', { name: 'Hidden by moderators' });
   await banner.getByText(hideReason).waitFor();
   await banner.getByText('Only you and the moderators can see this setup.', { exact: false }).waitFor();
@@ -144,7 +129,7 @@ it('a racer reports a spam setup, a moderator hides it from the queue, the spamm
   // The admin decides it: the hide stands.
   const decisionReason = 'The notes are still an advert with shop links; post the sheet without them.';
   const admin = await open();
-  await signInThroughApi(admin.page.request, server.baseUrl, ADMIN.login, ADMIN.password);
+  await world.signIn(admin.page.request, ADMIN.login, ADMIN.password);
   const tamsin = admin.page;
   const appeal = await openAppeal(tamsin, target.title);
   // An admin may decide any appeal: no "another moderator must decide" note, the button is live.
@@ -161,7 +146,7 @@ it('a racer reports a spam setup, a moderator hides it from the queue, the spamm
   await action.getByText('Appeal turned down').waitFor();
   await action.getByText(`The decision stands`, { exact: false }).waitFor();
   await action.getByText(decisionReason, { exact: false }).waitFor();
-  await shop.goto(`${server.baseUrl}/notifications`);
+  await shop.goto(`${world.server.baseUrl}/notifications`);
   await shop.getByText(`Your appeal was reviewed and the decision stands. Reason: ${decisionReason}`).waitFor();
 
   for (const w of opened) {

@@ -1,34 +1,23 @@
 import type { Browser } from 'playwright-core';
 import { jpegWithGps } from '../support/images';
-import { launchBrowser, openWatchedPage, seriousAccessibilityViolations, VIEWPORTS } from '../support/browser';
-import { startServer, type RunningServer } from '../support/server';
+import { openWatchedPage, seriousAccessibilityViolations, useServerAndBrowser, VIEWPORTS } from '../support/browser';
 
 jest.setTimeout(240_000);
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const world = useServerAndBrowser();
 
 it('a racer adds a car, starts a setup from the stock sheet, changes two fields with a note, writes previewed notes, adds a photo and prints (phone)', async () => {
-  const w = await openWatchedPage(browser, VIEWPORTS.phone);
+  const w = await openWatchedPage(world.browser, VIEWPORTS.phone);
   const { page } = w;
   // The demo newcomer, signed in through the API so the browser shares the session cookie.
-  const { csrfToken } = await (await page.request.get(`${server.baseUrl}/api/auth/csrf`)).json();
-  const signIn = await page.request.post(`${server.baseUrl}/api/auth/sign-in`, {
+  const { csrfToken } = await (await page.request.get(`${world.server.baseUrl}/api/auth/csrf`)).json();
+  const signIn = await page.request.post(`${world.server.baseUrl}/api/auth/sign-in`, {
     data: { login: 'rafi_new', password: 'first-season-stoat-8e' },
     headers: { 'X-CSRF-Token': csrfToken },
   });
   expect(signIn.ok()).toBe(true);
 
-  await page.goto(`${server.baseUrl}/garage`);
+  await page.goto(`${world.server.baseUrl}/garage`);
   await page.getByRole('link', { name: 'Add a car' }).first().click();
   await page.waitForURL((url) => url.pathname === '/garage/add-car');
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
@@ -93,20 +82,20 @@ it('a racer adds a car, starts a setup from the stock sheet, changes two fields 
 });
 
 it('shows a public demo setup read-only to a visitor, and its pit sheet, clean under axe (wide)', async () => {
-  const w = await openWatchedPage(browser, VIEWPORTS.wide);
+  const w = await openWatchedPage(world.browser, VIEWPORTS.wide);
   const { page } = w;
-  const res = await page.request.get(`${server.baseUrl}/api/racers/juno_braithwick`);
+  const res = await page.request.get(`${world.server.baseUrl}/api/racers/juno_braithwick`);
   expect(res.ok()).toBe(true);
-  await page.goto(`${server.baseUrl}/garage`);
+  await page.goto(`${world.server.baseUrl}/garage`);
   await page.getByRole('heading', { name: 'Garage', level: 1 }).waitFor();
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
   // The first demo setup of the seeded world is Juno's public loose-and-dusty sheet.
-  await page.goto(`${server.baseUrl}/setups/1`);
+  await page.goto(`${world.server.baseUrl}/setups/1`);
   await page.getByRole('heading', { name: /Hollow Pines/, level: 1 }).waitFor();
   expect(await page.getByRole('link', { name: 'Edit the sheet' }).count()).toBe(0);
   await page.getByText(/Final drive/).first().waitFor();
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
-  await page.goto(`${server.baseUrl}/setups/1/print`);
+  await page.goto(`${world.server.baseUrl}/setups/1/print`);
   await page.getByRole('button', { name: 'Print' }).waitFor();
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
   expect(w.consoleErrors).toEqual([]);

@@ -1,6 +1,4 @@
-import type { Browser } from 'playwright-core';
-import { launchBrowser, openWatchedPage, seriousAccessibilityViolations, VIEWPORTS } from '../support/browser';
-import { startServer, type RunningServer } from '../support/server';
+import { openWatchedPage, seriousAccessibilityViolations, useServerAndBrowser, VIEWPORTS } from '../support/browser';
 
 jest.setTimeout(120_000);
 
@@ -11,23 +9,12 @@ const DESTINATIONS = [
   { label: 'Profile', path: '/profile', heading: 'Profile' },
 ];
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const world = useServerAndBrowser();
 
 describe.each(Object.entries(VIEWPORTS))('app shell at %s size', (size, viewport) => {
   it('renders Discover in the shipped font with the server reachable and the demo kits listed', async () => {
-    const w = await openWatchedPage(browser, viewport);
-    await w.page.goto(server.baseUrl + '/');
+    const w = await openWatchedPage(world.browser, viewport);
+    await w.page.goto(world.server.baseUrl + '/');
     await w.page.getByText('Server and database reachable').waitFor();
     await w.page.getByText('Ottervale Kitworks Stoat 8N').waitFor();
     const font = await w.page.getByRole('heading', { name: 'Discover', level: 1 }).evaluate((el) => getComputedStyle(el).fontFamily);
@@ -43,8 +30,8 @@ describe.each(Object.entries(VIEWPORTS))('app shell at %s size', (size, viewport
   });
 
   it('navigates every destination from the tab bar or rail, each screen clean under axe', async () => {
-    const w = await openWatchedPage(browser, viewport);
-    await w.page.goto(server.baseUrl + '/');
+    const w = await openWatchedPage(world.browser, viewport);
+    await w.page.goto(world.server.baseUrl + '/');
     await w.page.getByText('Server and database reachable').waitFor();
     const nav = w.page.getByRole('navigation', { name: 'Main' });
     for (const d of DESTINATIONS) {
@@ -62,8 +49,8 @@ describe.each(Object.entries(VIEWPORTS))('app shell at %s size', (size, viewport
   });
 
   it('puts the navigation at the bottom on phones and in a side rail on wide screens', async () => {
-    const w = await openWatchedPage(browser, viewport);
-    await w.page.goto(server.baseUrl + '/garage');
+    const w = await openWatchedPage(world.browser, viewport);
+    await w.page.goto(world.server.baseUrl + '/garage');
     const box = await w.page.getByRole('navigation', { name: 'Main' }).boundingBox();
     expect(box).not.toBeNull();
     if (size === 'phone') {
@@ -78,11 +65,11 @@ describe.each(Object.entries(VIEWPORTS))('app shell at %s size', (size, viewport
   });
 
   it('shows a not-found screen for an unknown address, and the API still answers JSON 404s', async () => {
-    const w = await openWatchedPage(browser, viewport);
-    await w.page.goto(server.baseUrl + '/no/such/page');
+    const w = await openWatchedPage(world.browser, viewport);
+    await w.page.goto(world.server.baseUrl + '/no/such/page');
     await w.page.getByRole('heading', { name: 'Nothing here' }).waitFor();
     expect(await seriousAccessibilityViolations(w.page)).toEqual([]);
-    const api = await w.page.request.get(server.baseUrl + '/api/no/such/route');
+    const api = await w.page.request.get(world.server.baseUrl + '/api/no/such/route');
     expect(api.status()).toBe(404);
     expect(await api.json()).toMatchObject({ error: { code: 'not_found' } });
     await w.context.close();

@@ -1,24 +1,9 @@
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, openWatchedPage, seriousAccessibilityViolations, VIEWPORTS } from '../support/browser';
-import { startServer, type RunningServer } from '../support/server';
+import type { Page } from 'playwright-core';
+import { expectAccessible, openWatchedPage, useServerAndBrowser, VIEWPORTS } from '../support/browser';
 
 jest.setTimeout(300_000);
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
-
-async function expectAccessible(page: Page): Promise<void> {
-  expect(await seriousAccessibilityViolations(page)).toEqual([]);
-}
+const world = useServerAndBrowser();
 
 /** Types laps into the one lap field, Enter after each, the way a racer does in the pits. */
 async function typeLaps(page: Page, laps: string[]): Promise<void> {
@@ -42,16 +27,16 @@ async function addRun(page: Page, revision: RegExp, laps: string[], label: strin
 }
 
 it('a racer logs a track day with two runs on different revisions, reads the verdict and the one-field change, and asks for oils on a colder day (phone)', async () => {
-  const w = await openWatchedPage(browser, VIEWPORTS.phone);
+  const w = await openWatchedPage(world.browser, VIEWPORTS.phone);
   const { page } = w;
-  const { csrfToken } = await (await page.request.get(`${server.baseUrl}/api/auth/csrf`)).json();
-  const signIn = await page.request.post(`${server.baseUrl}/api/auth/sign-in`, {
+  const { csrfToken } = await (await page.request.get(`${world.server.baseUrl}/api/auth/csrf`)).json();
+  const signIn = await page.request.post(`${world.server.baseUrl}/api/auth/sign-in`, {
     data: { login: 'juno_braithwick', password: 'hollow-pines-laps-2' },
     headers: { 'X-CSRF-Token': csrfToken },
   });
   expect(signIn.ok()).toBe(true);
 
-  await page.goto(`${server.baseUrl}/track-days`);
+  await page.goto(`${world.server.baseUrl}/track-days`);
   await page.getByRole('link', { name: 'Log a track day' }).first().click();
   await page.waitForURL((url) => url.pathname === '/track-days/new');
   await page.getByRole('radio', { name: /Hollow Pines Circuit/ }).click();
@@ -75,11 +60,11 @@ it('a racer logs a track day with two runs on different revisions, reads the ver
   await expectAccessible(page);
 
   // Oils for a cold evening, from the setup page.
-  const kits = (await (await page.request.get(`${server.baseUrl}/api/kits`)).json()).kits as Array<{ id: number; slug: string }>;
+  const kits = (await (await page.request.get(`${world.server.baseUrl}/api/kits`)).json()).kits as Array<{ id: number; slug: string }>;
   const stoat = kits.find((k) => k.slug === 'ottervale-stoat-8e')!;
-  const listed = (await (await page.request.get(`${server.baseUrl}/api/kits/${stoat.id}/setups`)).json()).setups as Array<{ id: number; title: string }>;
+  const listed = (await (await page.request.get(`${world.server.baseUrl}/api/kits/${stoat.id}/setups`)).json()).setups as Array<{ id: number; title: string }>;
   const setupId = listed.find((s) => s.title === 'Hollow Pines — loose and dusty')!.id;
-  await page.goto(`${server.baseUrl}/setups/${setupId}`);
+  await page.goto(`${world.server.baseUrl}/setups/${setupId}`);
   await page.getByRole('link', { name: 'Oils for today’s temperature' }).click();
   await page.waitForURL((url) => url.pathname === `/setups/${setupId}/oils`);
   const oils = page.getByRole('region', { name: 'Oils for today' });

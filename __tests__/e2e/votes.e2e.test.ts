@@ -1,20 +1,9 @@
-import type { Browser, Page } from 'playwright-core';
-import { launchBrowser, openWatchedPage, seriousAccessibilityViolations, VIEWPORTS } from '../support/browser';
-import { startServer, type RunningServer } from '../support/server';
+import type { Page } from 'playwright-core';
+import { openWatchedPage, seriousAccessibilityViolations, useServerAndBrowser, VIEWPORTS } from '../support/browser';
 
 jest.setTimeout(240_000);
 
-let server: RunningServer;
-let browser: Browser;
-
-beforeAll(async () => {
-  server = await startServer();
-  browser = await launchBrowser();
-});
-afterAll(async () => {
-  await browser?.close();
-  await server?.stop();
-});
+const world = useServerAndBrowser();
 
 /** Titles of the Discover cards that speak of the surface, in the order shown. */
 async function bestForOrder(page: Page, surface: string): Promise<string[]> {
@@ -25,17 +14,17 @@ async function bestForOrder(page: Page, surface: string): Promise<string[]> {
 }
 
 async function showBestFor(page: Page, surface: string): Promise<void> {
-  await page.goto(`${server.baseUrl}/`);
+  await page.goto(`${world.server.baseUrl}/`);
   await page.getByRole('radio', { name: 'Best for a track surface' }).click();
   await page.getByRole('radio', { name: `Best for ${surface}` }).click();
   await page.getByRole('note', { name: 'Why this order' }).waitFor();
 }
 
 it('a racer votes that a setup works on a surface and sees it move to the top of "best for" that surface (phone)', async () => {
-  const w = await openWatchedPage(browser, VIEWPORTS.phone);
+  const w = await openWatchedPage(world.browser, VIEWPORTS.phone);
   const { page } = w;
-  const { csrfToken } = await (await page.request.get(`${server.baseUrl}/api/auth/csrf`)).json();
-  const signIn = await page.request.post(`${server.baseUrl}/api/auth/sign-in`, {
+  const { csrfToken } = await (await page.request.get(`${world.server.baseUrl}/api/auth/csrf`)).json();
+  const signIn = await page.request.post(`${world.server.baseUrl}/api/auth/sign-in`, {
     data: { login: 'pell-strand', password: 'brackwater-ruts-9' },
     headers: { 'X-CSRF-Token': csrfToken },
   });

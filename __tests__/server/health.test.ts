@@ -4,8 +4,11 @@ import { healthSchema } from '../../shared/types/health';
 import { apiErrorBodySchema } from '../../shared/types/errors';
 import { buildTestApp, type TestApp } from '../support/testApp';
 
+// A cluster of its own (scripts/test.sh): stopping it must not pull the database from under the
+// tests that run beside this one.
 const pgData = process.env.TUNEFORK_TEST_PGDATA;
 const pgPort = process.env.TUNEFORK_TEST_PGPORT;
+const databaseUrl = process.env.TUNEFORK_HEALTH_DATABASE_URL;
 
 function pg(command: 'start' | 'stop'): void {
   if (!pgData || !pgPort) throw new Error('run through npm test: TUNEFORK_TEST_PGDATA/PGPORT are not set');
@@ -27,7 +30,8 @@ async function waitForHealthy(t: TestApp): Promise<request.Response> {
 describe('GET /api/health', () => {
   let t: TestApp;
   beforeAll(() => {
-    t = buildTestApp();
+    if (!databaseUrl) throw new Error('run through npm test: TUNEFORK_HEALTH_DATABASE_URL is not set');
+    t = buildTestApp({ databaseUrl });
   });
   afterAll(async () => {
     await t.close();

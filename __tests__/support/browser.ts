@@ -1,6 +1,7 @@
 import AxeBuilder from '@axe-core/playwright';
 import { chromium, type APIRequestContext, type Browser, type BrowserContext, type Page } from 'playwright-core';
 import { CHROMIUM_ARGS, CHROMIUM_PATH } from './chromium';
+import { startServer, type RunningServer } from './server';
 
 export const VIEWPORTS = {
   phone: { width: 390, height: 844 },
@@ -64,4 +65,36 @@ export async function signInThroughApi(request: APIRequestContext, baseUrl: stri
   const res = await request.post(`${baseUrl}/api/auth/sign-in`, { data: { login, password }, headers: { 'X-CSRF-Token': csrfToken } });
   if (!res.ok()) throw new Error(`sign-in as ${login} failed: ${res.status()} ${await res.text()}`);
   return (await res.json()).csrfToken as string;
+}
+
+/** A browser test file's product server and chromium, and sign-in through the API against that server. */
+export type BrowserWorld = {
+  server: RunningServer;
+  browser: Browser;
+  /** signInThroughApi against this file's server. */
+  signIn(request: APIRequestContext, login: string, password: string): Promise<string>;
+};
+
+/**
+ * Starts the real server (on the shared e2e database) and Debian chromium before a file's tests and
+ * stops both after them. Call once at the top of a test file.
+ */
+export function useServerAndBrowser(): BrowserWorld {
+  const world = {
+    signIn: (request: APIRequestContext, login: string, password: string) => signInThroughApi(request, world.server.baseUrl, login, password),
+  } as BrowserWorld;
+  beforeAll(async () => {
+    world.server = await startServer();
+    world.browser = await launchBrowser();
+  });
+  afterAll(async () => {
+    await world.browser?.close();
+    await world.server?.stop();
+  });
+  return world;
+}
+
+/** No serious or critical axe findings on the page as it is now. */
+export async function expectAccessible(page: Page): Promise<void> {
+  expect(await seriousAccessibilityViolations(page)).toEqual([]);
 }
