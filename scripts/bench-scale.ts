@@ -1,7 +1,7 @@
 /**
  * Measures the community routes on the generated world (see scripts/bench-scale.sh, which migrates,
  * seeds the demo world and runs npm run seed:scale first). Three kinds of process:
- *   - the product server (server/index.ts), API rate limit lifted;
+ *   - the product server (server/index.ts), API rate limit lifted, no queue workers in it;
  *   - a bare Express app on the same database (`--bare PORT`): one route answering one
  *     primary-key lookup of a setup through pg, the ceiling the product routes are compared with;
  *   - autocannon (`--load JSON`), one process per measurement, on loopback.
@@ -161,8 +161,11 @@ async function main(): Promise<void> {
   const [appPort, barePort] = [await freePort(), await freePort()];
   const base = `http://127.0.0.1:${appPort}`;
   const bare = `http://127.0.0.1:${barePort}`;
+  // Deployed as README's "Running at scale" says: the app server only queues mail jobs
+  // (JOB_WORKERS=false); workers run as their own processes elsewhere, so the mail a fork causes is
+  // not composed, sent and received (by the local fake SMTP) inside the process being measured.
   const server = spawn('./node_modules/.bin/tsx', ['server/index.ts'], {
-    env: { ...process.env, PORT: String(appPort), LOG_LEVEL: 'warn', API_RATE_LIMIT_MAX: '100000000' },
+    env: { ...process.env, PORT: String(appPort), LOG_LEVEL: 'warn', API_RATE_LIMIT_MAX: '100000000', JOB_WORKERS: 'false' },
     stdio: ['ignore', 'inherit', 'inherit'],
   });
   const bareServer = spawn('./node_modules/.bin/tsx', ['scripts/bench-scale.ts', '--bare', String(barePort)], { stdio: ['ignore', 'inherit', 'inherit'] });
