@@ -142,33 +142,46 @@ export async function forkSetup(db: Database, user: User, sourceId: number, inpu
   const { values } = validatedValues(vehicleClass, forkValues);
   const stockTaken = plan.optionParts.filter((row) => Object.hasOwn(data.stockChoices, row.key) && data.stockChoices[row.key] === 'stock');
 
-  const fork = await db.sequelize.transaction(async (transaction) => {
-    const created = await db.models.Setup.create(
-      {
+  // One statement, so one round trip and one commit: the revision's id is drawn first, the setup
+  // is written already pointing at it (that foreign key is checked at commit), then the revision.
+  // Writing the setup once, rather than inserting it and updating it to point at its revision,
+  // also spares a second version of the row and of its index entries.
+  const [fork] = await db.sequelize.query(
+    `WITH ids AS (SELECT CAST(nextval('setup_revisions_id_seq') AS integer) AS revision_id),
+     created AS (
+       INSERT INTO setups (owner_id, car_id, vehicle_class, template_version, title, visibility, share_token, track_type,
+                           temperature_c, grip, notes_md, forked_from_setup_id, forked_from_revision_id, upstream_revision_id,
+                           family_root_id, current_revision_id, revision_count, created_at, updated_at)
+       SELECT :ownerId, :carId, :vehicleClass, :templateVersion, :title, 'private', :shareToken, :trackType,
+              :temperatureC, :grip, '', :sourceId, :revisionId, :revisionId, :familyRootId, ids.revision_id, 1, now(), now()
+         FROM ids
+       RETURNING *),
+     first AS (
+       INSERT INTO setup_revisions (id, setup_id, number, values, change_note, author_id, created_at)
+       SELECT ids.revision_id, created.id, 1, CAST(:values AS jsonb), :changeNote, :ownerId, now() FROM ids, created
+       RETURNING id)
+     SELECT created.* FROM created, first`,
+    {
+      replacements: {
         ownerId: user.id,
         carId: car.id,
         vehicleClass,
         templateVersion: getTemplate(vehicleClass).version,
         title: data.title ?? source.title,
-        visibility: 'private',
         shareToken: crypto.randomBytes(18).toString('base64url'),
         trackType: source.trackType,
         temperatureC: source.temperatureC,
         grip: source.grip,
-        notesMd: '',
-        forkedFromSetupId: source.id,
-        forkedFromRevisionId: revision.id,
-        upstreamRevisionId: revision.id,
+        sourceId: source.id,
+        revisionId: revision.id,
         familyRootId: source.familyRootId ?? source.id,
+        values: JSON.stringify(values),
+        changeNote: forkChangeNote(prepared, stockTaken),
       },
-      { transaction },
-    );
-    const first = await db.models.SetupRevision.create(
-      { setupId: created.id, number: 1, values, changeNote: forkChangeNote(prepared, stockTaken), authorId: user.id },
-      { transaction },
-    );
-    return created.update({ currentRevisionId: first.id, revisionCount: 1 }, { transaction });
-  });
+      model: db.models.Setup,
+      mapToModel: true,
+    },
+  );
   for (const listener of listeners) listener(fork, source);
   return fork;
 }
