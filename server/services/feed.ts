@@ -94,10 +94,11 @@ function feedSql(cursor: FeedCursor | null): string {
         ORDER BY r.created_at DESC, r.id DESC LIMIT $2)
       UNION ALL
       (SELECT 'fork', s.id, s.created_at, u.handle, u.display_name, s.id, s.title, s.vehicle_class, NULL, NULL, o.id, o.title
-         FROM setups o
-         JOIN setups s ON s.forked_from_setup_id = o.id AND ${listableSetup('s')}
+         -- Listed forks of setups I own, newest first, straight from setups_listed_forks_of_owner_idx.
+         FROM setups s
+         JOIN setups o ON o.id = s.forked_from_setup_id AND o.owner_id = $1 AND o.hidden_at IS NULL AND o.deleted_at IS NULL
          JOIN users u ON u.id = s.owner_id AND ${activeRacer('u')}
-        WHERE o.owner_id = $1 AND o.hidden_at IS NULL AND o.deleted_at IS NULL AND s.owner_id <> $1
+        WHERE s.forked_from_owner_id = $1 AND ${listableSetup('s')} AND s.owner_id <> $1
           AND ${afterCursor('fork', cursor, 's.created_at', 's.id')}
         ORDER BY s.created_at DESC, s.id DESC LIMIT $2)
     ) feed

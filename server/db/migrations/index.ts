@@ -10,6 +10,7 @@ import * as follows from './20261202T0700-follows-and-notifications';
 import * as votes from './20261202T0800-votes-and-search';
 import * as mailQueue from './20261202T0900-mail-preferences';
 import * as moderation from './20261202T1000-moderation';
+import * as forksOfOwner from './20261202T1100-forks-of-owner';
 import * as moderationNotices from './20261202T1005-moderation-notices';
 
 export type Migration = {
@@ -32,4 +33,5 @@ export const migrations: Migration[] = [
   { name: '20261202T0900-mail-preferences', ...mailQueue },
   { name: '20261202T1000-moderation', ...moderation },
   { name: '20261202T1005-moderation-notices', ...moderationNotices },
+  { name: '20261202T1100-forks-of-owner', ...forksOfOwner },
 ];
