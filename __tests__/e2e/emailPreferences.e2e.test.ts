@@ -23,8 +23,13 @@ it('changes notification e-mail settings, then stops one kind from an e-mail lin
   expect(await seriousAccessibilityViolations(page)).toEqual([]);
   await page.getByRole('checkbox', { name: 'Forks of my setups' }).click();
   await page.getByText('E-mail settings saved.').waitFor();
+  // The choice shows at once; the test reads the server only after the save has been answered.
+  const digestSaved = page.waitForResponse(
+    (res) => res.url().endsWith('/api/me/email-preferences') && res.request().method() === 'PUT' && res.ok(),
+  );
   await page.getByRole('radio', { name: 'One digest e-mail a day' }).click();
   await page.getByRole('radio', { name: 'One digest e-mail a day', checked: true }).waitFor();
+  await digestSaved;
   const saved = await (await page.request.get(`${world.server.baseUrl}/api/me/email-preferences`)).json();
   expect(saved.preferences).toMatchObject({ enabled: true, delivery: 'daily-digest', types: { 'setup-forked': false, 'comment-on-setup': true } });
   const me = await (await page.request.get(`${world.server.baseUrl}/api/me`)).json();
