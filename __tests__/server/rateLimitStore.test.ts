@@ -88,4 +88,15 @@ describe('the PostgreSQL rate-limit store', () => {
     expect((await one.increment(key)).totalHits).toBe(62);
     expect(await stored()).toBe(62);
   });
+
+  it('drops hits still waiting in memory when their window ends, so they never count against the next one', async () => {
+    const key = '198.51.100.11';
+    const short = store(t.db.pool, 300, 100);
+    expect((await short.increment(key)).totalHits).toBe(1);
+    expect((await short.increment(key)).totalHits).toBe(2); // waiting in memory
+    await new Promise((r) => setTimeout(r, 400));
+    expect((await short.increment(key)).totalHits).toBe(1);
+    await short.flush();
+    expect((await short.get(key))?.totalHits).toBe(1);
+  });
 });

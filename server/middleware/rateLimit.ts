@@ -73,8 +73,10 @@ export class PostgresRateLimitStore implements Store {
       this.scheduleFlush();
       return { totalHits: seen.total + seen.pending, resetTime: seen.resetAt };
     }
-    // Written now, together with any hits still waiting for this key.
-    const hits = 1 + (seen?.pending ?? 0);
+    // Written now, together with any hits still waiting for this key (unless their window has
+    // ended: they counted against a window nobody is limited by any more).
+    const carried = seen && seen.resetAt.getTime() > now ? seen.pending : 0;
+    const hits = 1 + carried;
     if (seen) seen.pending = 0;
     try {
       const row = await this.write(key, hits);
@@ -82,7 +84,7 @@ export class PostgresRateLimitStore implements Store {
       this.local.set(key, { total: row.hits, pending: this.local.get(key)?.pending ?? 0, resetAt: row.reset_at, syncedAt: Date.now() });
       return { totalHits: row.hits, resetTime: row.reset_at };
     } catch (error) {
-      if (seen) seen.pending += hits - 1;
+      if (seen) seen.pending += carried;
       throw error;
     }
   }
@@ -113,6 +115,9 @@ export class PostgresRateLimitStore implements Store {
 
   /** Writes every key's waiting hits; the next hit of a key then reads the fresh total. */
   async flush(): Promise<void> {
+    const now = Date.now();
+    // Hits of a window that has ended are dropped, not written into the next one.
+    for (const entry of this.local.values()) if (entry.pending > 0 && entry.resetAt.getTime() <= now) entry.pending = 0;
     const waiting = [...this.local].filter(([, entry]) => entry.pending > 0);
     await Promise.all(
       waiting.map(async ([key, entry]) => {
@@ -128,8 +133,8 @@ export class PostgresRateLimitStore implements Store {
       }),
     );
     // Forget keys whose window ended, so the map holds only active clients.
-    const now = Date.now();
-    for (const [key, entry] of this.local) if (entry.pending === 0 && entry.resetAt.getTime() <= now) this.local.delete(key);
+    const later = Date.now();
+    for (const [key, entry] of this.local) if (entry.pending === 0 && entry.resetAt.getTime() <= later) this.local.delete(key);
   }
 
   async get(key: string): Promise<ClientRateLimitInfo | undefined> {
