@@ -1,7 +1,7 @@
 import { QueryTypes } from 'sequelize';
 import { NEW_ACCOUNT_HOURS, NEW_ACCOUNT_LIMITS, myLimitsSchema, type MyLimits } from '../../shared/types/moderation';
 import { countLinks, inWords, newAccountStatus } from '../../server/services/moderation/limits';
-import { createRacer, signIn, type SessionAgent } from '../support/accounts';
+import { type SessionAgent, signedInRacer, type SignedInRacer } from '../support/accounts';
 import { ensureCatalog, kitId } from '../support/garage';
 import { plainJpeg } from '../support/images';
 import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
@@ -14,12 +14,7 @@ import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
 
 let t: TestApp;
 let stoat8n: number;
-type Racer = SessionAgent & { id: number; handle: string };
-
-async function racer(opts: Parameters<typeof createRacer>[1] = {}): Promise<Racer> {
-  const r = await createRacer(t.db, opts);
-  return { ...(await signIn(t.app, r.handle, r.password)), id: r.user.id, handle: r.handle };
-}
+type Racer = SignedInRacer;
 
 async function limitsOf(s: SessionAgent): Promise<MyLimits> {
   return myLimitsSchema.parse((await s.agent.get('/api/me/limits').expect(200)).body);
@@ -52,7 +47,7 @@ beforeAll(async () => {
   await resetDatabase(t.db);
   await ensureCatalog(t.db);
   stoat8n = await kitId(t.db, 'ottervale-stoat-8n');
-  const host = await racer();
+  const host = await signedInRacer(t);
   publicSetupId = (await newSetup(host, await car(host)).expect(201)).body.setup.id;
 });
 afterAll(async () => {
@@ -93,7 +88,7 @@ describe('who is limited', () => {
   });
 
   it('shows a new racer the limits in advance, with what is used and when they lift', async () => {
-    const fresh = await racer({ ageDays: 0, verified: false });
+    const fresh = await signedInRacer(t, { ageDays: 0, verified: false });
     const limits = await limitsOf(fresh);
     expect(limits).toEqual({
       limited: true,
@@ -109,14 +104,14 @@ describe('who is limited', () => {
   });
 
   it('limits nobody with a verified account older than a day, and never moderators or admins', async () => {
-    const settled = await racer({ ageDays: 7 });
+    const settled = await signedInRacer(t, { ageDays: 7 });
     expect(await limitsOf(settled)).toEqual({ limited: false, because: [], ageLiftsAt: null, setups: null, comments: null, linksPerPost: null, photosAllowed: true });
     const carId = await car(settled);
     for (let i = 0; i <= NEW_ACCOUNT_LIMITS.setupsPerHour; i += 1) await newSetup(settled, carId, { notesMarkdown: THREE_LINKS }).expect(201);
     for (let i = 0; i <= NEW_ACCOUNT_LIMITS.commentsPerHour; i += 1) await comment(settled, publicSetupId, THREE_LINKS).expect(201);
 
     for (const role of ['moderator', 'admin'] as const) {
-      const staff = await racer({ role, ageDays: 0, verified: false });
+      const staff = await signedInRacer(t, { role, ageDays: 0, verified: false });
       expect((await limitsOf(staff)).limited).toBe(false);
       await comment(staff, publicSetupId, THREE_LINKS).expect(201);
     }
@@ -125,7 +120,7 @@ describe('who is limited', () => {
 
 describe('refusals name the limit and when it lifts', () => {
   it(`allows a new account ${NEW_ACCOUNT_LIMITS.setupsPerHour} setups in a rolling hour`, async () => {
-    const fresh = await racer({ ageDays: 0 });
+    const fresh = await signedInRacer(t, { ageDays: 0 });
     const carId = await car(fresh);
     for (let i = 0; i < NEW_ACCOUNT_LIMITS.setupsPerHour; i += 1) await newSetup(fresh, carId).expect(201);
     expect((await limitsOf(fresh)).setups).toEqual({ perHour: NEW_ACCOUNT_LIMITS.setupsPerHour, usedThisHour: NEW_ACCOUNT_LIMITS.setupsPerHour });
@@ -145,7 +140,7 @@ describe('refusals name the limit and when it lifts', () => {
   });
 
   it(`allows a new account ${NEW_ACCOUNT_LIMITS.commentsPerHour} comments an hour`, async () => {
-    const fresh = await racer({ ageDays: 0 });
+    const fresh = await signedInRacer(t, { ageDays: 0 });
     for (let i = 0; i < NEW_ACCOUNT_LIMITS.commentsPerHour; i += 1) await comment(fresh, publicSetupId, `Question ${i}`).expect(201);
     const refused = await comment(fresh, publicSetupId, 'One more question');
     expect(refused.status).toBe(429);
@@ -154,7 +149,7 @@ describe('refusals name the limit and when it lifts', () => {
   });
 
   it('refuses more than two links in setup notes, change notes and comments, naming the field; two are fine', async () => {
-    const fresh = await racer({ ageDays: 0 });
+    const fresh = await signedInRacer(t, { ageDays: 0 });
     const carId = await car(fresh);
     const notes = await newSetup(fresh, carId, { notesMarkdown: THREE_LINKS });
     expect(notes.status).toBe(422);
@@ -189,7 +184,7 @@ describe('refusals name the limit and when it lifts', () => {
   });
 
   it('refuses photos until the e-mail is verified, then takes them', async () => {
-    const unverified = await racer({ ageDays: 30, verified: false });
+    const unverified = await signedInRacer(t, { ageDays: 30, verified: false });
     const created = await newSetup(unverified, await car(unverified)).expect(201);
     const upload = () =>
       unverified.agent.post(`/api/setups/${created.body.setup.id}/photos`).set('X-CSRF-Token', unverified.csrf).attach('photo', photo, 'car.jpg');

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { ACTION_OUTCOME_TEXT, moderationActionSummarySchema, queueResponseSchema, type QueueItem } from '../../shared/types/moderation';
 import { composeNotification } from '../../server/services/emailNotifications';
-import { createRacer, signIn, type SessionAgent } from '../support/accounts';
+import { type SessionAgent, signedInRacer, type SignedInRacer } from '../support/accounts';
 import { carWithStockSetup, ensureCatalog, kitId } from '../support/garage';
 import { plainJpeg } from '../support/images';
 import { act, auditOf, fileReport, notificationsOf, sql } from '../support/moderationQueue';
@@ -13,7 +13,7 @@ import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
  */
 
 let t: TestApp;
-type Session = SessionAgent & { id: number; handle: string };
+type Session = SignedInRacer;
 let author: Session;
 let follower: Session;
 let reporter: Session;
@@ -23,26 +23,19 @@ let mod2: Session;
 let admin: Session;
 let stoat8n: number;
 
-/** A signed-in racer whose account is a month old, so new-account posting limits do not apply. */
-async function session(role: 'racer' | 'moderator' | 'admin', prefix: string): Promise<Session> {
-  const r = await createRacer(t.db, { role, prefix });
-  await sql(t.db, "UPDATE users SET created_at = now() - interval '30 days' WHERE id = :id RETURNING id", { id: r.user.id });
-  return { ...(await signIn(t.app, r.handle, r.password)), id: r.user.id, handle: r.handle };
-}
-
 beforeAll(async () => {
   t = buildTestApp();
   await resetDatabase(t.db);
   await ensureCatalog(t.db);
   stoat8n = await kitId(t.db, 'ottervale-stoat-8n');
   [author, follower, reporter, reporter2, mod, mod2, admin] = await Promise.all([
-    session('racer', 'author'),
-    session('racer', 'follower'),
-    session('racer', 'reporter'),
-    session('racer', 'reporter'),
-    session('moderator', 'mod'),
-    session('moderator', 'mod'),
-    session('admin', 'admin'),
+    signedInRacer(t, { role: 'racer', prefix: 'author' }),
+    signedInRacer(t, { role: 'racer', prefix: 'follower' }),
+    signedInRacer(t, { role: 'racer', prefix: 'reporter' }),
+    signedInRacer(t, { role: 'racer', prefix: 'reporter' }),
+    signedInRacer(t, { role: 'moderator', prefix: 'mod' }),
+    signedInRacer(t, { role: 'moderator', prefix: 'mod' }),
+    signedInRacer(t, { role: 'admin', prefix: 'admin' }),
   ]);
   await follower.agent.post(`/api/racers/${author.handle}/follow`).set('X-CSRF-Token', follower.csrf).expect(200);
 });
@@ -349,7 +342,7 @@ describe('hide and restore', () => {
   });
 
   it('hides a racer profile: bio withheld from others, shown with the notice to the racer and moderators', async () => {
-    const r = await session('racer', 'bio');
+    const r = await signedInRacer(t, { role: 'racer', prefix: 'bio' });
     await r.agent.patch('/api/me/profile').set('X-CSRF-Token', r.csrf).send({ bio: 'Best prices at my shop', homeTrack: 'Old Kiln Indoor' }).expect(200);
     await act(mod, { targetType: 'racer', targetId: r.id, action: 'hide', reason: 'Advertising in the bio.' }).expect(200);
     const anon = (await request(t.app).get(`/api/racers/${r.handle}`).expect(200)).body.racer;
@@ -378,7 +371,7 @@ describe('hide and restore', () => {
 
 describe('hide everything by an account, and suspensions', () => {
   async function spammer() {
-    const s = await session('racer', 'spam');
+    const s = await signedInRacer(t, { role: 'racer', prefix: 'spam' });
     const a = await publicSetup(s, 'Zephyrine discount parts one');
     const b = await publicSetup(s, 'Zephyrine discount parts two');
     const comment = (await s.agent.post(`/api/setups/${a.id}/comments`).set('X-CSRF-Token', s.csrf).send({ bodyMarkdown: 'zephyrine deals' }).expect(201)).body.comment;
@@ -429,12 +422,12 @@ describe('hide everything by an account, and suspensions', () => {
     });
 
     // Indefinitely, content left as it is; a moderator's account only by an admin.
-    const other = await session('racer', 'susp');
+    const other = await signedInRacer(t, { role: 'racer', prefix: 'susp' });
     const kept = await publicSetup(other, 'Kept visible');
     await act(mod, { targetType: 'racer', targetId: other.id, action: 'suspend', reason: 'Threats.', suspendDays: null }).expect(200);
     expect((await sql<{ suspended_indefinitely: boolean }>(t.db, 'SELECT suspended_indefinitely FROM users WHERE id = :id', { id: other.id }))[0].suspended_indefinitely).toBe(true);
     expect((await follower.agent.get(`/api/setups/${kept.id}`)).status).toBe(200);
-    const colleague = await session('moderator', 'modsusp');
+    const colleague = await signedInRacer(t, { role: 'moderator', prefix: 'modsusp' });
     await act(mod, { targetType: 'racer', targetId: colleague.id, action: 'suspend', reason: 'x', suspendDays: 1 }).expect(403);
     await act(admin, { targetType: 'racer', targetId: colleague.id, action: 'suspend', reason: 'Abused the queue.', suspendDays: 1 }).expect(200);
     expect((await colleague.agent.get('/api/me').expect(200)).body.user).toBeNull();

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { actionOnMeSchema, myAppealSchema, queueResponseSchema, suspendedSignInDetailsSchema } from '../../shared/types/moderation';
 import { issueAppealToken } from '../../server/services/moderation/appeals';
-import { createRacer, csrfAgent, signIn, type SessionAgent } from '../support/accounts';
+import { csrfAgent, type SessionAgent, signedInRacer, type SignedInRacer, signIn } from '../support/accounts';
 import { carWithStockSetup, ensureCatalog, kitId } from '../support/garage';
 import { act, auditOf, notificationsOf, sql } from '../support/moderationQueue';
 import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
@@ -13,7 +13,7 @@ import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
  */
 
 let t: TestApp;
-type Session = SessionAgent & { id: number; handle: string; password: string };
+type Session = SignedInRacer;
 let author: Session;
 let other: Session;
 let mod: Session;
@@ -21,23 +21,17 @@ let mod2: Session;
 let admin: Session;
 let stoat8n: number;
 
-async function session(role: 'racer' | 'moderator' | 'admin', prefix: string): Promise<Session> {
-  const r = await createRacer(t.db, { role, prefix });
-  await sql(t.db, "UPDATE users SET created_at = now() - interval '30 days' WHERE id = :id RETURNING id", { id: r.user.id });
-  return { ...(await signIn(t.app, r.handle, r.password)), id: r.user.id, handle: r.handle, password: r.password };
-}
-
 beforeAll(async () => {
   t = buildTestApp();
   await resetDatabase(t.db);
   await ensureCatalog(t.db);
   stoat8n = await kitId(t.db, 'ottervale-stoat-8n');
   [author, other, mod, mod2, admin] = await Promise.all([
-    session('racer', 'author'),
-    session('racer', 'other'),
-    session('moderator', 'mod'),
-    session('moderator', 'mod'),
-    session('admin', 'admin'),
+    signedInRacer(t, { role: 'racer', prefix: 'author' }),
+    signedInRacer(t, { role: 'racer', prefix: 'other' }),
+    signedInRacer(t, { role: 'moderator', prefix: 'mod' }),
+    signedInRacer(t, { role: 'moderator', prefix: 'mod' }),
+    signedInRacer(t, { role: 'admin', prefix: 'admin' }),
   ]);
 });
 afterAll(async () => {
@@ -139,7 +133,7 @@ describe('deciding an appeal', () => {
   });
 
   it('overturning a hide-all brings back everything it hid', async () => {
-    const s = await session('racer', 'spam');
+    const s = await signedInRacer(t, { role: 'racer', prefix: 'spam' });
     const { setup } = await carWithStockSetup(s, stoat8n, { visibility: 'public', title: 'Everything back' });
     const res = await act(mod, { targetType: 'racer', targetId: s.id, action: 'hide-all', reason: 'Looked like spam.' }).expect(200);
     const filed = (await appeal(s, res.body.action.id).expect(201)).body.appeal;
@@ -152,7 +146,7 @@ describe('deciding an appeal', () => {
 
 describe('a suspended racer appeals without signing in', () => {
   it('gets a signed appeal token on a refused sign-in, refuses forged and expired tokens, accepts one appeal, and is let back in when overturned', async () => {
-    const s = await session('racer', 'suspended');
+    const s = await signedInRacer(t, { role: 'racer', prefix: 'suspended' });
     const suspended = await act(mod, { targetType: 'racer', targetId: s.id, action: 'suspend', reason: 'Spam comments.', suspendDays: 30 }).expect(200);
     const actionId = suspended.body.action.id;
 
@@ -193,7 +187,7 @@ describe('a suspended racer appeals without signing in', () => {
   });
 
   it('only admins decide appeals against suspending a moderator', async () => {
-    const m = await session('moderator', 'modsusp');
+    const m = await signedInRacer(t, { role: 'moderator', prefix: 'modsusp' });
     const res = await act(admin, { targetType: 'racer', targetId: m.id, action: 'suspend', reason: 'Abused the queue.', suspendDays: 2 }).expect(200);
     const token = issueAppealToken(t.config.sessionSecret, m.id, res.body.action.id).token;
     const { agent, csrf } = await csrfAgent(t.app);

@@ -1,7 +1,7 @@
 import { auditPageSchema, type AuditEntry } from '../../shared/types/moderation';
 import { AUDIT_PAGE_SIZE } from '../../server/services/moderation/auditLog';
 import { recordAudit } from '../../server/services/moderation/audit';
-import { createRacer, signIn, type SessionAgent } from '../support/accounts';
+import { type SessionAgent, signedInRacer, type SignedInRacer } from '../support/accounts';
 import { carWithStockSetup, ensureCatalog, kitId } from '../support/garage';
 import { act, sql } from '../support/moderationQueue';
 import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
@@ -12,24 +12,18 @@ import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
  */
 
 let t: TestApp;
-type Session = SessionAgent & { id: number; handle: string };
+type Session = SignedInRacer;
 let mod: Session;
 let admin: Session;
 let racer: Session;
 let stoat8n: number;
-
-async function session(role: 'racer' | 'moderator' | 'admin', prefix: string): Promise<Session> {
-  const r = await createRacer(t.db, { role, prefix });
-  await sql(t.db, "UPDATE users SET created_at = now() - interval '30 days' WHERE id = :id RETURNING id", { id: r.user.id });
-  return { ...(await signIn(t.app, r.handle, r.password)), id: r.user.id, handle: r.handle };
-}
 
 beforeAll(async () => {
   t = buildTestApp();
   await resetDatabase(t.db);
   await ensureCatalog(t.db);
   stoat8n = await kitId(t.db, 'ottervale-stoat-8n');
-  [mod, admin, racer] = await Promise.all([session('moderator', 'auditmod'), session('admin', 'auditadmin'), session('racer', 'auditracer')]);
+  [mod, admin, racer] = await Promise.all([signedInRacer(t, { role: 'moderator', prefix: 'auditmod' }), signedInRacer(t, { role: 'admin', prefix: 'auditadmin' }), signedInRacer(t, { role: 'racer', prefix: 'auditracer' })]);
 });
 afterAll(async () => {
   await t.close();
@@ -71,7 +65,7 @@ describe('what is recorded', () => {
   });
 
   it('records admins’ role changes, suspensions and lifting them', async () => {
-    const target = await session('racer', 'promoted');
+    const target = await signedInRacer(t, { role: 'racer', prefix: 'promoted' });
     await admin.agent.patch(`/api/admin/users/${target.id}/role`).set('X-CSRF-Token', admin.csrf).send({ role: 'moderator' }).expect(200);
     const until = new Date(Date.now() + 3 * 86_400_000).toISOString();
     await admin.agent.post(`/api/admin/users/${target.id}/suspend`).set('X-CSRF-Token', admin.csrf).send({ until, reason: 'Cooling off.' }).expect(200);

@@ -1,7 +1,7 @@
 import request from 'supertest';
 import { QueryTypes } from 'sequelize';
 import { AUTO_HIDE_REPORTER_MIN_AGE_DAYS, AUTO_HIDE_REPORTERS } from '../../shared/types/moderation';
-import { createRacer, signIn, type SessionAgent } from '../support/accounts';
+import { type SessionAgent, signedInRacer, type SignedInRacer } from '../support/accounts';
 import { carWithStockSetup, ensureCatalog, kitId } from '../support/garage';
 import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
 
@@ -13,18 +13,13 @@ import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
 
 let t: TestApp;
 let stoat8n: number;
-type Racer = SessionAgent & { id: number; handle: string };
-
-async function racer(opts: Parameters<typeof createRacer>[1] = {}): Promise<Racer> {
-  const r = await createRacer(t.db, opts);
-  return { ...(await signIn(t.app, r.handle, r.password)), id: r.user.id, handle: r.handle };
-}
+type Racer = SignedInRacer;
 
 function report(s: SessionAgent, targetType: string, targetId: number) {
   return s.agent.post('/api/reports').set('X-CSRF-Token', s.csrf).send({ targetType, targetId, reason: 'spam' });
 }
 
-const trusted = () => racer({ ageDays: AUTO_HIDE_REPORTER_MIN_AGE_DAYS + 1 });
+const trusted = () => signedInRacer(t, { ageDays: AUTO_HIDE_REPORTER_MIN_AGE_DAYS + 1 });
 
 async function autoHides(type: string, id: number) {
   return t.db.sequelize.query<{ actor_id: number | null; reason: string }>(
@@ -57,10 +52,10 @@ afterAll(async () => {
 jest.setTimeout(60_000);
 
 it(`hides a setup at ${AUTO_HIDE_REPORTERS} trusted reporters, not before, and never counts unverified or young accounts`, async () => {
-  const author = await racer({ prefix: 'seller' });
+  const author = await signedInRacer(t, { prefix: 'seller' });
   const { setup } = await carWithStockSetup(author, stoat8n, { title: 'Half-price bushings', visibility: 'public' });
-  const unverified = await racer({ verified: false, ageDays: 60 });
-  const young = await racer({ ageDays: AUTO_HIDE_REPORTER_MIN_AGE_DAYS - 1 });
+  const unverified = await signedInRacer(t, { verified: false, ageDays: 60 });
+  const young = await signedInRacer(t, { ageDays: AUTO_HIDE_REPORTER_MIN_AGE_DAYS - 1 });
 
   for (const r of [...trustedReporters.slice(0, AUTO_HIDE_REPORTERS - 1), unverified, young]) {
     await report(r, 'setup', setup.id).expect(201);
@@ -98,20 +93,20 @@ it(`hides a setup at ${AUTO_HIDE_REPORTERS} trusted reporters, not before, and n
 });
 
 it('does not hide again what is already hidden', async () => {
-  const author = await racer();
+  const author = await signedInRacer(t);
   const { setup } = await carWithStockSetup(author, stoat8n, { visibility: 'public' });
   for (const r of trustedReporters.slice(0, AUTO_HIDE_REPORTERS)) await report(r, 'setup', setup.id).expect(201);
   expect(await autoHides('setup', setup.id)).toHaveLength(1);
   // Moderators still see hidden things and may report them; the count rises, the hide is not repeated.
-  const moderator = await racer({ role: 'moderator', ageDays: 400 });
+  const moderator = await signedInRacer(t, { role: 'moderator', ageDays: 400 });
   await report(moderator, 'setup', setup.id).expect(201);
   expect(await autoHides('setup', setup.id)).toHaveLength(1);
 });
 
 it('hides a comment once, even when the deciding reports arrive together', async () => {
-  const author = await racer();
+  const author = await signedInRacer(t);
   const { setup } = await carWithStockSetup(author, stoat8n, { visibility: 'public' });
-  const commenter = await racer({ prefix: 'spammer' });
+  const commenter = await signedInRacer(t, { prefix: 'spammer' });
   const comment = await commenter.agent
     .post(`/api/setups/${setup.id}/comments`)
     .set('X-CSRF-Token', commenter.csrf)
@@ -134,7 +129,7 @@ it('hides a comment once, even when the deciding reports arrive together', async
 });
 
 it('leaves the content of moderators and admins up for a person to decide', async () => {
-  const staff = await racer({ role: 'moderator', ageDays: 400 });
+  const staff = await signedInRacer(t, { role: 'moderator', ageDays: 400 });
   const { setup } = await carWithStockSetup(staff, stoat8n, { visibility: 'public' });
   for (const r of trustedReporters.slice(0, AUTO_HIDE_REPORTERS)) await report(r, 'setup', setup.id).expect(201);
   expect(await autoHides('setup', setup.id)).toEqual([]);
@@ -143,7 +138,7 @@ it('leaves the content of moderators and admins up for a person to decide', asyn
 });
 
 it('does not count reporters who are suspended now', async () => {
-  const author = await racer();
+  const author = await signedInRacer(t);
   const { setup } = await carWithStockSetup(author, stoat8n, { visibility: 'public' });
   const benched = await trusted();
   await report(benched, 'setup', setup.id).expect(201);

@@ -50,6 +50,17 @@ export async function createRacer(
 }
 
 /** Signs in through the API and returns the agent with the new session's CSRF token. */
+/** A racer made by createRacer, signed in; with their id, handle and password for the test. */
+export type SignedInRacer = SessionAgent & { id: number; handle: string; password: string };
+
+export async function signedInRacer(
+  t: { db: Database; app: Express },
+  opts: Parameters<typeof createRacer>[1] = {},
+): Promise<SignedInRacer> {
+  const r = await createRacer(t.db, opts);
+  return { ...(await signIn(t.app, r.handle, r.password)), id: r.user.id, handle: r.handle, password: r.password };
+}
+
 export async function signIn(app: Express | string, login: string, password: string): Promise<SessionAgent> {
   const { agent, csrf } = await csrfAgent(app);
   const res = await agent.post('/api/auth/sign-in').set('X-CSRF-Token', csrf).send({ login, password });
