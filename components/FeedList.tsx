@@ -34,7 +34,7 @@ function Footer({ hasMore, loadingMore, moreError, onMore, count }: Pick<FeedLis
   if (hasMore) return <Button label="Show older activity" variant="secondary" onPress={onMore} />;
   return (
     <AppText tone="muted" style={styles.end}>
-      That is everything so far.
+      That is everything so far. Older changes are in each setup’s history.
     </AppText>
   );
 }

@@ -16,6 +16,9 @@
  * on, a popular setup's count row is updated thousands of times in one transaction, and each
  * update walks the chain of that row's earlier versions. ALTER TABLE … DISABLE TRIGGER is
  * transactional and needs only table ownership: a failed run rolls back with the triggers on.
+ * The activity feed's fan-out triggers are off too (on, every revision would be copied to each of
+ * its owner's followers: ~30 million rows); the feed is then filled as the feed migration fills an
+ * existing database: each follow brings the followee's newest listed changes (FOLLOW_BACKFILL).
  *
  * Skew: who is followed, which setups are forked and which are voted on are drawn from a
  * Zipf-like law, P(rank r) ∝ 1/r, by sampling r = floor(exp(U · ln(n + 1))) with U uniform on
@@ -28,6 +31,14 @@
 import bcrypt from 'bcryptjs';
 import { Client, type ClientBase } from 'pg';
 import { performance } from 'node:perf_hooks';
+import { BACKFILL_SQL as FEED_BACKFILL_SQL, FOLLOW_BACKFILL } from '../server/db/migrations/20261202T1200-feed-items';
+
+/** The feed migration's fan-out triggers, off during the bulk inserts (see above). */
+const FEED_TRIGGERS = [
+  ['setups', 'setups_feed_fan_out'],
+  ['setup_revisions', 'setup_revisions_feed_fan_out'],
+  ['follows', 'follows_feed_backfill'],
+] as const;
 
 export type ScaleSizes = {
   racers: number;
@@ -109,6 +120,7 @@ export async function seedScale(
     await q('SET LOCAL synchronous_commit = off');
     await q('ALTER TABLE setups DISABLE TRIGGER setups_fork_count_on_insert_delete');
     await q('ALTER TABLE setup_votes DISABLE TRIGGER setup_votes_counts_on_insert_delete');
+    for (const [table, trigger] of FEED_TRIGGERS) await q(`ALTER TABLE ${table} DISABLE TRIGGER ${trigger}`);
     await timed(timings, 'users', log, async () => {
       const res = await q(
         `INSERT INTO users (handle, display_name, email, email_verified_at, password_hash, classes_raced, bio, created_at, updated_at)
@@ -216,8 +228,11 @@ export async function seedScale(
 
     await timed(timings, 'setup_revisions', log, async () => {
       // Stock sheet with the shock oils and (where the kit has them) ride heights varied per step.
+      // Changed fields, as diffSetupValues counts them: every step moves each varied field that the
+      // kit's stock sheet has (front oil by (g+i)%3, rear by (g+2i)%3, ride height by i%3: never the
+      // same offset twice running), nothing else; revision 1 counts 0.
       const res = await q(
-        `INSERT INTO setup_revisions (id, setup_id, number, values, change_note, author_id, created_at)
+        `INSERT INTO setup_revisions (id, setup_id, number, values, change_note, author_id, changed_field_count, created_at)
          SELECT s.first_rev_id + n.i, s.id, n.i + 1,
                 k.stock_values || jsonb_build_object(
                   'shock.front.oil', (k.stock_values ->> 'shock.front.oil')::int + 50 * ((s.g + n.i) % 3 - 1),
@@ -229,7 +244,11 @@ export async function seedScale(
                      ELSE format('Shock oil %s front, %s rear after practice %s.',
                                  (k.stock_values ->> 'shock.front.oil')::int + 50 * ((s.g + n.i) % 3 - 1),
                                  (k.stock_values ->> 'shock.rear.oil')::int + 50 * ((s.g + 2 * n.i) % 3 - 1), n.i) END,
-                r.id, s.created + n.i * interval '1 hour'
+                r.id,
+                CASE WHEN n.i = 0 THEN 0
+                     ELSE (k.stock_values ->> 'shock.front.oil' IS NOT NULL)::int + (k.stock_values ->> 'shock.rear.oil' IS NOT NULL)::int
+                          + (k.stock_values ->> 'susp.rear.ride-height' IS NOT NULL)::int END,
+                s.created + n.i * interval '1 hour'
            FROM scale_setups s
            JOIN scale_racers r ON r.rank = s.owner_rank
            JOIN scale_kits k ON k.idx = s.kit_idx
@@ -301,6 +320,11 @@ export async function seedScale(
           WHERE c.works <> EXCLUDED.works OR c.fails <> EXCLUDED.fails`,
       );
       return (forks.rowCount ?? 0) + (votes.rowCount ?? 0);
+    });
+
+    await timed(timings, 'feed_items', log, async () => {
+      for (const [table, trigger] of FEED_TRIGGERS) await q(`ALTER TABLE ${table} ENABLE TRIGGER ${trigger}`);
+      return (await q(FEED_BACKFILL_SQL(FOLLOW_BACKFILL))).rowCount ?? 0;
     });
 
     await timed(timings, 'commit', log, async () => {

@@ -38,7 +38,7 @@ describe('the Activity tab', () => {
     expect(await screen.findByRole('link', { name: 'Newer sheet' }, { timeout: 5_000 })).toBeTruthy();
     fireEvent.press(screen.getByRole('button', { name: 'Show older activity' }));
     expect(await screen.findByRole('link', { name: 'Older sheet' })).toBeTruthy();
-    expect(screen.getByText('That is everything so far.')).toBeTruthy();
+    expect(screen.getByText("That is everything so far. Older changes are in each setup’s history.")).toBeTruthy();
     expect(calls.map((c) => c.url).filter((u) => u.includes('/feed'))).toEqual(['/api/feed', '/api/feed?cursor=CURSOR-1']);
   });
 

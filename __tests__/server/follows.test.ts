@@ -1,5 +1,6 @@
 import request from 'supertest';
 import type { FeedItem, FeedPage, FollowList } from '../../shared/types/community';
+import { FOLLOW_BACKFILL } from '../../server/db/migrations/20261202T1200-feed-items';
 import { FEED_PAGE_SIZE } from '../../server/services/feed';
 import { FOLLOW_PAGE_SIZE } from '../../server/services/follows';
 import { createRacer, signIn, type SessionAgent } from '../support/accounts';
@@ -187,13 +188,20 @@ describe('the activity feed', () => {
     // second as three of them. Laid out so that page 1 ends on the setup, with revisions and the fork
     // of the same second still to come, and page 2 ends inside a second of three revisions.
     const { rows } = await t.db.pool.query<{ id: number; at: Date }>(
-      `INSERT INTO setup_revisions (setup_id, number, values, change_note, author_id, created_at)
-       SELECT $1, 100 + i, '{}', 'Bulk change ' || i, $2, timestamptz '2026-11-01 08:00:00Z' + (i / 3) * interval '1 second'
+      `INSERT INTO setup_revisions (setup_id, number, values, change_note, author_id, changed_field_count, created_at)
+       SELECT $1, 100 + i, '{}', 'Bulk change ' || i, $2,
+              -- An empty sheet: the first drops every field of the sheet before it, the rest change none.
+              CASE WHEN i = 0 THEN (SELECT count(*)::int FROM jsonb_object_keys(
+                                      (SELECT values FROM setup_revisions WHERE setup_id = $1 ORDER BY number DESC LIMIT 1)))
+                   ELSE 0 END,
+              timestamptz '2026-11-01 08:00:00Z' + (i / 3) * interval '1 second'
          FROM generate_series(0, 45) AS i
        RETURNING id, created_at AS at`,
       [setup, juno.id],
     );
     await t.db.pool.query(`UPDATE setups SET created_at = timestamptz '2026-11-01 08:00:08Z' WHERE id IN ($1, $2)`, [setup, fork]);
+    // The feed keeps its own copy of each item's time (setups' times never change in the product).
+    await t.db.pool.query(`UPDATE feed_items SET created_at = timestamptz '2026-11-01 08:00:08Z' WHERE kind IN ('setup', 'fork') AND item_id IN ($1, $2)`, [setup, fork]);
     const kinds = { fork: 0, revision: 1, setup: 2 };
     // Expected order: newest first, then kind, then id, all descending (common practice, no source).
     const expected = [
@@ -217,6 +225,49 @@ describe('the activity feed', () => {
     const seen = [...first.items, ...second.items, ...third.items].map(key);
     expect(seen).toEqual(expected);
     expect((await feedPage(me)).items.slice(0, 2).map(key)).toEqual([`setup:${freshSetup}`, `revision:${fresh}`]);
+  });
+
+  it("brings a newly followed racer's newest listed changes in, and takes them out again on unfollowing (forks of mine stay)", async () => {
+    const [me, juno] = [await racer('me'), await racer('juno')];
+    const older = await publicSetup(juno, 'Older sheet');
+    await publicSetup(juno, 'Kept to myself', stoat8n, 'private');
+    const sheet = await publicSetup(juno, 'Busy sheet');
+    // 25 revisions, one a second: with the two setups, more than FOLLOW_BACKFILL changes.
+    const { rows } = await t.db.pool.query<{ id: number }>(
+      // The sheet as it stands each time (nothing changed: a count of 0), dated ahead of now.
+      `INSERT INTO setup_revisions (setup_id, number, values, change_note, author_id, changed_field_count, created_at)
+       SELECT $1, 100 + i, (SELECT values FROM setup_revisions WHERE setup_id = $1 AND number = 1), 'Change ' || i, $2, 0,
+              now() + i * interval '1 second'
+         FROM generate_series(1, 25) AS i
+       RETURNING id`,
+      [sheet, juno.id],
+    );
+    const mine = await publicSetup(me, 'Mine to fork');
+    const fork = await forkOf(juno, mine);
+    await follow(me, juno);
+    const newest = [...rows].reverse().slice(0, FOLLOW_BACKFILL).map((r) => `revision:${r.id}`);
+    const seen: string[] = [];
+    for (let page = await feedPage(me); ; page = await feedPage(me, page.nextCursor)) {
+      seen.push(...page.items.map(key));
+      if (!page.nextCursor) break;
+    }
+    // Their newest FOLLOW_BACKFILL changes (the revisions are dated ahead), then their fork of my
+    // setup, told once as a fork; the private setup and the older changes stay on their profile.
+    expect(seen).toEqual([...newest, `fork:${fork}`]);
+    expect(seen).not.toContain(`setup:${older}`);
+
+    await write(me, 'delete', `/api/racers/${juno.handle}/follow`).expect(200);
+    expect((await feedPage(me)).items.map(key)).toEqual([`fork:${fork}`]);
+  });
+
+  it('shows the whole history of a setup made public after its revisions were saved', async () => {
+    const [me, juno] = [await racer('me'), await racer('juno')];
+    await follow(me, juno);
+    const later = await publicSetup(juno, 'Shared later', stoat8n, 'private');
+    const change = await revise(juno, later, 'Made while private');
+    expect((await feedPage(me)).items).toEqual([]);
+    await write(juno, 'patch', `/api/setups/${later}`, { visibility: 'public' }).expect(200);
+    expect((await feedPage(me)).items.map(key)).toEqual([`revision:${change}`, `setup:${later}`]);
   });
 
   it('refuses a damaged cursor with a 400 that says what to do', async () => {

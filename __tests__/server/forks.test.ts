@@ -117,8 +117,8 @@ describe('family', () => {
            SELECT ${owner!.ownerId}, car_id, vehicle_class, template_version, 'Fork ' || i, 'public', md5(random()::text),
                   parent, current_revision_id, ${root.id}, 1 FROM setups WHERE id = parent
            RETURNING id INTO new_id;
-           INSERT INTO setup_revisions (setup_id, number, values, change_note, author_id)
-           SELECT new_id, 1, r.values || jsonb_build_object('shock.rear.oil', 400 + (i % 5) * 50), 'generated', ${owner!.ownerId}
+           INSERT INTO setup_revisions (setup_id, number, values, change_note, author_id, changed_field_count)
+           SELECT new_id, 1, r.values || jsonb_build_object('shock.rear.oil', 400 + (i % 5) * 50), 'generated', ${owner!.ownerId}, 0
              FROM setups s JOIN setup_revisions r ON r.id = s.current_revision_id WHERE s.id = parent
            RETURNING id INTO rev;
            UPDATE setups SET current_revision_id = rev WHERE id = new_id;

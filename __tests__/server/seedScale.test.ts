@@ -1,5 +1,6 @@
 import type { PoolClient } from 'pg';
 import { seedDemoWorld } from '../../server/seeders';
+import { FOLLOW_BACKFILL } from '../../server/db/migrations/20261202T1200-feed-items';
 import { scaleSizes, seedScale, type ScaleResult, type ScaleSizes } from '../../scripts/seed-scale';
 import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
 
@@ -99,6 +100,42 @@ describe('seed:scale generator', () => {
       { tgname: 'setup_votes_counts_on_insert_delete', tgenabled: 'O' },
       { tgname: 'setups_fork_count_on_insert_delete', tgenabled: 'O' },
     ]);
+  });
+
+  it("fills each reader's feed with the newest listed changes of every racer they follow, and its triggers are on again", async () => {
+    // Recomputed another way than the generator's window query: per follow, a LATERAL walk of the
+    // followee's listed setups and revisions newest first, cut at FOLLOW_BACKFILL.
+    const drift = await one<{ missing: number; extra: number; follows: number }>(`
+      WITH expected AS (
+        SELECT f.follower_id AS reader_id, x.created_at, x.kind, x.item_id
+          FROM follows f
+          JOIN users u ON u.id = f.follower_id AND u.handle LIKE 'racer\\_%'
+          CROSS JOIN LATERAL (
+            SELECT * FROM (SELECT s.created_at, 'setup' AS kind, s.id AS item_id FROM setups s
+                            WHERE s.owner_id = f.followee_id AND s.visibility = 'public' AND s.hidden_at IS NULL AND s.deleted_at IS NULL
+                           UNION ALL
+                           SELECT r.created_at, 'revision', r.id FROM setups s JOIN setup_revisions r ON r.setup_id = s.id
+                            WHERE s.owner_id = f.followee_id AND r.number > 1
+                              AND s.visibility = 'public' AND s.hidden_at IS NULL AND s.deleted_at IS NULL) y
+             ORDER BY y.created_at DESC, y.kind DESC, y.item_id DESC LIMIT ${FOLLOW_BACKFILL}) x),
+      -- Generated readers only: the demo world's feeds were written live by the triggers, uncut.
+      actual AS (SELECT fi.reader_id, fi.created_at, fi.kind, fi.item_id FROM feed_items fi
+                   JOIN users u ON u.id = fi.reader_id AND u.handle LIKE 'racer\\_%' WHERE fi.kind <> 'fork')
+      SELECT (SELECT count(*) FROM (SELECT * FROM expected EXCEPT SELECT * FROM actual) m)::int AS missing,
+             (SELECT count(*) FROM (SELECT * FROM actual EXCEPT SELECT * FROM expected) e)::int AS extra,
+             (SELECT count(*) FROM follows f JOIN users u ON u.id = f.follower_id AND u.handle LIKE 'racer\\_%')::int AS follows`);
+    expect(drift.follows).toBeGreaterThan(100);
+    expect(drift).toMatchObject({ missing: 0, extra: 0 });
+    const forks = await one<{ missing: number }>(`
+      SELECT count(*)::int AS missing FROM setups s
+       WHERE s.forked_from_owner_id <> s.owner_id
+         AND NOT EXISTS (SELECT 1 FROM feed_items fi WHERE fi.reader_id = s.forked_from_owner_id AND fi.kind = 'fork' AND fi.item_id = s.id)`);
+    expect(forks.missing).toBe(0);
+    const { rows } = await client.query(
+      `SELECT tgname, tgenabled FROM pg_trigger
+        WHERE tgname IN ('setups_feed_fan_out', 'setup_revisions_feed_fan_out', 'follows_feed_backfill', 'follows_feed_unfollow') ORDER BY tgname`,
+    );
+    expect(rows.map((r: { tgenabled: string }) => r.tgenabled)).toEqual(['O', 'O', 'O', 'O']);
   });
 
   // The thresholds are common practice, no source: a log-uniform draw gives rank r a share ∝ 1/r

@@ -10,6 +10,8 @@ export class SetupRevision extends Model<InferAttributes<SetupRevision>, InferCr
   declare values: StoredSetupValues;
   declare changeNote: string;
   declare authorId: number;
+  /** How many fields differ from the revision before (0 for revision 1), counted with diffSetupValues when written. */
+  declare changedFieldCount: number;
   declare createdAt: CreationOptional<Date>;
   declare author?: NonAttribute<User>;
 
@@ -22,6 +24,7 @@ export class SetupRevision extends Model<InferAttributes<SetupRevision>, InferCr
         values: { type: DataTypes.JSONB, allowNull: false },
         changeNote: { type: DataTypes.TEXT, allowNull: false, defaultValue: '' },
         authorId: { type: DataTypes.INTEGER, allowNull: false },
+        changedFieldCount: { type: DataTypes.INTEGER, allowNull: false },
         createdAt: DataTypes.DATE,
       },
       { sequelize, tableName: 'setup_revisions', underscored: true, updatedAt: false },

@@ -146,7 +146,8 @@ async function ensureSpamSetups(db: Database, spammer: User): Promise<number[]> 
       const notes = [`Started from the ${kit.name} stock sheet.`, ...(spam.spamRevision ? [spam.spamRevision] : [])];
       let last = 0;
       for (const [i, changeNote] of notes.entries()) {
-        last = (await SetupRevision.create({ setupId: created.id, number: i + 1, values, changeNote, authorId: spammer.id, createdAt }, { transaction })).id;
+        // Every revision holds the same sheet (only the note advertises), so none changes a field.
+        last = (await SetupRevision.create({ setupId: created.id, number: i + 1, values, changeNote, authorId: spammer.id, createdAt, changedFieldCount: 0 }, { transaction })).id;
       }
       await created.update({ currentRevisionId: last, revisionCount: notes.length }, { transaction });
       await db.sequelize.query('UPDATE setups SET created_at = :at, updated_at = :at WHERE id = :id', { replacements: { at: createdAt, id: created.id }, transaction });

@@ -9,6 +9,7 @@ import { buildStockSheet } from './stockSheets';
 import type { Transaction } from 'sequelize';
 import crypto from 'node:crypto';
 import { validateSetupValues, getTemplate } from '../../shared/types/templates';
+import { diffSetupValues } from '../../shared/compute/setup/diff';
 import type { StoredSetupValues } from '../../shared/types/setups';
 import { DEMO_KITS, DEMO_MAKERS, DEMO_RACERS, DEMO_TRACKS } from './demoWorld';
 import { seedDemoTrackDays } from './demoTrackDays';
@@ -113,13 +114,17 @@ async function seedDemoGarages(db: Database, transaction: Transaction): Promise<
       let last = 0;
       let lastAt = new Date();
       for (const [i, step] of steps.entries()) {
+        const previous = values;
         values = { ...values, ...step.changes };
         const checked = validateSetupValues(template, values);
         if (!checked.ok) throw new Error(`demo setup ${s.title} step ${i} is invalid: ${JSON.stringify(checked.errors)}`);
         // Spread the history over the past weeks so it reads like a season of testing.
         const createdAt = new Date(Date.now() - (steps.length - i) * 6 * 86_400_000);
         const rev = await SetupRevision.create(
-          { setupId: setup.id, number: i + 1, values, changeNote: step.note, authorId: owner.id, createdAt },
+          {
+            setupId: setup.id, number: i + 1, values, changeNote: step.note, authorId: owner.id, createdAt,
+            changedFieldCount: i === 0 ? 0 : diffSetupValues(previous, values).length,
+          },
           { transaction },
         );
         last = rev.id;

@@ -53,57 +53,38 @@ const feedCursorSchema = z.tuple([cursorTimeSchema, z.enum(FEED_KINDS), cursorId
 type FeedCursor = z.infer<typeof feedCursorSchema>;
 
 /**
- * The part of one branch after the cursor. The feed is ordered by (created_at, kind, id), all
- * descending, and each branch has one kind, so the comparison folds to a range on created_at
- * (plus id within the cursor's own kind) that the branch's index serves directly.
+ * One page of my feed_items (kept by triggers: see migration 20261202T1200-feed-items), newest
+ * first, with what each item shows. Whether an item may be shown is decided here, at read time:
+ * its setup public and neither hidden nor deleted, its owner not suspended; a fork only while its
+ * original is still mine and listed, and a followed racer's new setup that is a fork of mine only
+ * once, as the fork. $1 is me, $2 the page size plus one (to know whether there is more), and after
+ * a cursor $3..$5 its (time, kind, id): the row comparison is a range of the primary key.
  */
-function afterCursor(kind: FeedKind, cursor: FeedCursor | null, at: string, id: string): string {
-  if (!cursor) return 'TRUE';
-  const [, cursorKind] = cursor;
-  if (kind === cursorKind) return `(${at}, ${id}) < ($3::timestamptz, $4::integer)`;
-  return FEED_KINDS.indexOf(kind) < FEED_KINDS.indexOf(cursorKind) ? `${at} <= $3::timestamptz` : `${at} < $3::timestamptz`;
-}
-
-/**
- * One query for a page: three branches, each cut at the page size in its own index order, merged
- * and cut again. $1 is me, $2 the page size plus one (to know whether there is more).
- */
-function feedSql(cursor: FeedCursor | null): string {
+export function feedSql(cursor: FeedCursor | null): string {
   return `
-    SELECT feed.*, ${cursorTime('feed.created_at')} AS cursor_at FROM (
-      (SELECT 'setup'::text AS kind, s.id, s.created_at, u.handle AS actor_handle, u.display_name AS actor_name,
-              s.id AS setup_id, s.title AS setup_title, s.vehicle_class,
-              NULL::integer AS revision_number, NULL::text AS change_note, NULL::integer AS original_id, NULL::text AS original_title
-         FROM follows f
-         JOIN users u ON u.id = f.followee_id AND ${activeRacer('u')}
-         JOIN setups s ON s.owner_id = f.followee_id AND ${listableSetup('s')}
-        WHERE f.follower_id = $1 AND ${afterCursor('setup', cursor, 's.created_at', 's.id')}
-          -- A public fork of one of my setups is told once, as a fork.
-          AND NOT EXISTS (SELECT 1 FROM setups o WHERE o.id = s.forked_from_setup_id AND o.owner_id = $1 AND o.hidden_at IS NULL AND o.deleted_at IS NULL)
-        ORDER BY s.created_at DESC, s.id DESC LIMIT $2)
-      UNION ALL
-      (SELECT 'revision', r.id, r.created_at, u.handle, u.display_name, s.id, s.title, s.vehicle_class, r.number,
-              -- A change note hidden by moderators is blanked; the change itself stays in the feed.
-              CASE WHEN EXISTS (SELECT 1 FROM content_hides h WHERE h.target_type = 'revision' AND h.target_id = r.id) THEN '' ELSE r.change_note END,
-              NULL, NULL
-         FROM follows f
-         JOIN users u ON u.id = f.followee_id AND ${activeRacer('u')}
-         JOIN setups s ON s.owner_id = f.followee_id AND ${listableSetup('s')}
-         JOIN setup_revisions r ON r.setup_id = s.id AND r.number > 1
-        WHERE f.follower_id = $1 AND ${afterCursor('revision', cursor, 'r.created_at', 'r.id')}
-        ORDER BY r.created_at DESC, r.id DESC LIMIT $2)
-      UNION ALL
-      (SELECT 'fork', s.id, s.created_at, u.handle, u.display_name, s.id, s.title, s.vehicle_class, NULL, NULL, o.id, o.title
-         -- Listed forks of setups I own, newest first, straight from setups_listed_forks_of_owner_idx.
-         FROM setups s
-         JOIN setups o ON o.id = s.forked_from_setup_id AND o.owner_id = $1 AND o.hidden_at IS NULL AND o.deleted_at IS NULL
-         JOIN users u ON u.id = s.owner_id AND ${activeRacer('u')}
-        WHERE s.forked_from_owner_id = $1 AND ${listableSetup('s')} AND s.owner_id <> $1
-          AND ${afterCursor('fork', cursor, 's.created_at', 's.id')}
-        ORDER BY s.created_at DESC, s.id DESC LIMIT $2)
-    ) feed
-    ORDER BY feed.created_at DESC, feed.kind DESC, feed.id DESC
-    LIMIT $2`;
+    SELECT fi.kind, fi.item_id AS id, fi.created_at, ${cursorTime('fi.created_at')} AS cursor_at,
+           u.handle AS actor_handle, u.display_name AS actor_name, s.id AS setup_id, s.title AS setup_title, s.vehicle_class,
+           r.number AS revision_number,
+           -- A change note hidden by moderators is blanked; the change itself stays in the feed.
+           CASE WHEN r.id IS NULL THEN NULL
+                WHEN EXISTS (SELECT 1 FROM content_hides h WHERE h.target_type = 'revision' AND h.target_id = r.id) THEN ''
+                ELSE r.change_note END AS change_note,
+           o.id AS original_id, o.title AS original_title
+      FROM feed_items fi
+      LEFT JOIN setup_revisions r ON fi.kind = 'revision' AND r.id = fi.item_id
+      JOIN setups s ON s.id = CASE WHEN fi.kind = 'revision' THEN r.setup_id ELSE fi.item_id END AND ${listableSetup('s')}
+      JOIN users u ON u.id = s.owner_id AND ${activeRacer('u')}
+      -- OFFSET 0 keeps this a primary-key lookup per item (flattened, the planner joined all my setups).
+      LEFT JOIN LATERAL (SELECT o.id, o.title FROM setups o
+                          WHERE o.id = s.forked_from_setup_id AND o.owner_id = $1 AND o.hidden_at IS NULL AND o.deleted_at IS NULL
+                         OFFSET 0) o ON TRUE
+     WHERE fi.reader_id = $1
+       ${cursor ? 'AND (fi.created_at, fi.kind, fi.item_id) < ($3::timestamptz, $4::text, $5::integer)' : ''}
+       AND CASE fi.kind WHEN 'fork' THEN o.id IS NOT NULL AND s.owner_id <> $1
+                        WHEN 'setup' THEN o.id IS NULL
+                        ELSE TRUE END
+     ORDER BY fi.created_at DESC, fi.kind DESC, fi.item_id DESC
+     LIMIT $2`;
 }
 
 type FeedRow = {
@@ -143,11 +124,9 @@ function toItem(row: FeedRow): FeedItem {
 export async function getFeed(db: Database, me: User, rawCursor: unknown): Promise<FeedPage> {
   const cursor = decodeCursor(rawCursor, feedCursorSchema);
   const params: Array<string | number> = [me.id, FEED_PAGE_SIZE + 1];
-  if (cursor) params.push(cursor[0], cursor[2]);
-  // A named statement per shape of the query (first page, or after a cursor of each kind): each
-  // connection plans it once instead of on every request, where planning cost as much as running.
-  const shape = cursor ? cursor[1] : 'first';
-  const { rows } = await db.pool.query<FeedRow>({ name: `feed-${shape}`, text: feedSql(cursor), values: params });
+  if (cursor) params.push(...cursor);
+  // Named statements (first page, later pages): each connection plans them once, not per request.
+  const { rows } = await db.pool.query<FeedRow>({ name: cursor ? 'feed-after' : 'feed-first', text: feedSql(cursor), values: params });
   const page = rows.slice(0, FEED_PAGE_SIZE);
   const last = page[page.length - 1];
   return {

@@ -157,8 +157,8 @@ export async function forkSetup(db: Database, user: User, sourceId: number, inpu
          FROM ids
        RETURNING *),
      first AS (
-       INSERT INTO setup_revisions (id, setup_id, number, values, change_note, author_id, created_at)
-       SELECT ids.revision_id, created.id, 1, CAST(:values AS jsonb), :changeNote, :ownerId, now() FROM ids, created
+       INSERT INTO setup_revisions (id, setup_id, number, values, change_note, author_id, changed_field_count, created_at)
+       SELECT ids.revision_id, created.id, 1, CAST(:values AS jsonb), :changeNote, :ownerId, 0, now() FROM ids, created
        RETURNING id)
      SELECT created.* FROM created, first`,
     {

@@ -1,5 +1,6 @@
 import type { RevisionCreate } from '../../shared/types/setups';
 import { revisionCreateSchema } from '../../shared/types/setups';
+import { diffSetupValues } from '../../shared/compute/setup/diff';
 import type { Database } from '../db/database';
 import { ApiError } from '../errors';
 import type { Transaction } from 'sequelize';
@@ -57,8 +58,18 @@ export async function saveRevision(db: Database, owner: User, setupId: number, i
     if (setup.currentRevisionId !== data.baseRevisionId) {
       throw await staleRevisionError(db, setup, transaction, 'This setup changed since you opened it. Your values are kept; review the differences and save again.');
     }
+    // The setup page lists how many fields each revision changed: counted once, here, against the
+    // revision this one follows (validated values are stored as they are, -0 already made 0).
+    const previous = await db.models.SetupRevision.findByPk(setup.currentRevisionId!, { attributes: ['values'], transaction });
     const created = await db.models.SetupRevision.create(
-      { setupId: setup.id, number: setup.revisionCount + 1, values, changeNote: data.changeNote, authorId: owner.id },
+      {
+        setupId: setup.id,
+        number: setup.revisionCount + 1,
+        values,
+        changeNote: data.changeNote,
+        authorId: owner.id,
+        changedFieldCount: previous ? diffSetupValues(previous.values, values).length : 0,
+      },
       { transaction },
     );
     await setup.update({ currentRevisionId: created.id, revisionCount: setup.revisionCount + 1 }, { transaction });

@@ -35,7 +35,14 @@ export async function createSetupWithValues(db: Database, owner: User, carId: nu
       { transaction },
     );
     const revision = await db.models.SetupRevision.create(
-      { setupId: setup.id, number: 1, values, changeNote: `Imported from a setup file (revision ${doc.setup.revision.number}).`, authorId: owner.id },
+      {
+        setupId: setup.id,
+        number: 1,
+        values,
+        changeNote: `Imported from a setup file (revision ${doc.setup.revision.number}).`,
+        authorId: owner.id,
+        changedFieldCount: 0,
+      },
       { transaction },
     );
     return setup.update({ currentRevisionId: revision.id, revisionCount: 1 }, { transaction });

@@ -3,7 +3,6 @@ import { QueryTypes } from 'sequelize';
 import type { Lineage, SetupCreate, SetupDetail, SetupMetaUpdate, StoredSetupValues } from '../../shared/types/setups';
 import { setupCreateSchema, setupMetaUpdateSchema } from '../../shared/types/setups';
 import { getTemplate, validateSetupValues } from '../../shared/types/templates';
-import { diffSetupValues } from '../../shared/compute/setup/diff';
 import type { Database } from '../db/database';
 import { ApiError } from '../errors';
 import type { Setup } from '../models/Setup';
@@ -58,14 +57,18 @@ export async function createSetup(db: Database, owner: User, input: SetupCreate)
     );
     const note = data.startFrom.kind === 'stock' ? `Started from the ${kit.name} stock sheet.` : 'Started from a copy of one of my setups.';
     const revision = await db.models.SetupRevision.create(
-      { setupId: setup.id, number: 1, values, changeNote: note, authorId: owner.id },
+      { setupId: setup.id, number: 1, values, changeNote: note, authorId: owner.id, changedFieldCount: 0 },
       { transaction },
     );
     return setup.update({ currentRevisionId: revision.id, revisionCount: 1 }, { transaction });
   });
 }
 
-/** The setup page's one row: the setup, its car, kit, maker and owner, its hide, its counts and its original. */
+/**
+ * The setup page's one row: the setup, its car, kit, maker and owner, its hide, its counts and its
+ * original. Only the current revision's sheet is read; the list of revisions carries each one's
+ * stored changed-field count instead of its values.
+ */
 const DETAIL_SQL = `
   SELECT s.id, s.owner_id, s.title, s.visibility, s.share_token, s.vehicle_class, s.template_version, s.track_type,
          s.temperature_c, s.grip, s.notes_md, s.current_revision_id, s.hidden_at, s.deleted_at, s.created_at, s.updated_at,
@@ -78,10 +81,11 @@ const DETAIL_SQL = `
          (SELECT count(*)::int FROM comments cm WHERE cm.setup_id = s.id AND cm.deleted_at IS NULL AND cm.hidden_at IS NULL) AS comment_count,
          o.id AS original_id, o.title AS original_title, o.visibility AS original_visibility, o.share_token AS original_share_token,
          o.owner_id AS original_owner_id, o.hidden_at AS original_hidden_at, o.deleted_at AS original_deleted_at,
-         ou.handle AS original_owner_handle, fr.number AS original_revision_number,
+         ou.handle AS original_owner_handle, fr.number AS original_revision_number, cr.values AS current_values,
          (SELECT COALESCE(json_agg(json_build_object(
-                   'id', r.id, 'number', r.number, 'values', r.values, 'change_note', r.change_note, 'author_id', r.author_id,
-                   'author_handle', ru.handle, 'created_at', r.created_at, 'note_hidden', rh.target_id IS NOT NULL)
+                   'id', r.id, 'number', r.number, 'change_note', r.change_note, 'author_id', r.author_id,
+                   'author_handle', ru.handle, 'created_at', r.created_at, 'note_hidden', rh.target_id IS NOT NULL,
+                   'changed_field_count', r.changed_field_count)
                    ORDER BY r.number DESC), '[]')
             FROM setup_revisions r
             JOIN users ru ON ru.id = r.author_id
@@ -101,6 +105,7 @@ const DETAIL_SQL = `
     LEFT JOIN setups o ON o.id = s.forked_from_setup_id
     LEFT JOIN users ou ON ou.id = o.owner_id
     LEFT JOIN setup_revisions fr ON fr.id = s.forked_from_revision_id
+    LEFT JOIN setup_revisions cr ON cr.id = s.current_revision_id
    WHERE s.id = $1`;
 
 type DetailRow = {
@@ -114,13 +119,13 @@ type DetailRow = {
   original_id: number | null; original_title: string | null; original_visibility: SetupDetail['visibility'] | null; original_share_token: string | null;
   original_owner_id: number | null; original_hidden_at: Date | null; original_deleted_at: Date | null;
   original_owner_handle: string | null; original_revision_number: number | null;
-  revisions: RevisionRow[]; photos: PhotoRow[];
+  current_values: StoredSetupValues; revisions: RevisionRow[]; photos: PhotoRow[];
 };
 
 /** One revision as the detail query aggregates it (times as JSON strings). */
 type RevisionRow = {
-  id: number; number: number; values: StoredSetupValues; change_note: string; author_id: number; author_handle: string;
-  created_at: string; note_hidden: boolean;
+  id: number; number: number; change_note: string; author_id: number; author_handle: string;
+  created_at: string; note_hidden: boolean; changed_field_count: number;
 };
 type PhotoRow = { id: number; storage_key: string; thumb_key: string; width: number; height: number; caption: string };
 
@@ -180,18 +185,18 @@ export async function getSetupDetail(db: Database, id: number, viewer: Viewer, s
     currentRevision: {
       id: current.id,
       number: current.number,
-      values: current.values,
+      values: row.current_values,
       changeNote: current.note_hidden && !(seesHiddenNotes || viewer?.id === current.author_id) ? '' : current.change_note,
       createdAt: new Date(current.created_at).toISOString(),
     },
-    revisions: revisions.map((r, i) => ({
+    revisions: revisions.map((r) => ({
       id: r.id,
       number: r.number,
       changeNote: r.note_hidden && !(seesHiddenNotes || viewer?.id === r.author_id) ? '' : r.change_note,
       noteHidden: r.note_hidden,
       authorHandle: r.author_handle,
       createdAt: new Date(r.created_at).toISOString(),
-      changedFieldCount: revisions[i + 1] ? diffSetupValues(revisions[i + 1].values, r.values).length : 0,
+      changedFieldCount: r.changed_field_count,
     })),
     photos: row.photos.map((p) => ({
       id: p.id,

@@ -1,4 +1,5 @@
 import type { Transaction } from 'sequelize';
+import { diffSetupValues } from '../../shared/compute/setup/diff';
 import { applyMerge, threeWayMerge, upstreamChanges, type FieldMerge, type MergeChoice } from '../../shared/compute/setup/merge';
 import { ERROR_CODES } from '../../shared/types/errors';
 import { upstreamApplySchema, type Upstream, type UpstreamApply, type UpstreamRow } from '../../shared/types/forks';
@@ -222,7 +223,15 @@ export async function applyUpstream(db: Database, user: User, setupId: number, i
       const { values } = validatedValues(fork.vehicleClass, applyMerge(state.mine.values, state.rows, choices));
       const items = state.offered.filter((row) => take.includes(row.key)).map((row) => changeText(places.get(row.key), row));
       const revision = await db.models.SetupRevision.create(
-        { setupId: fork.id, number: fork.revisionCount + 1, values, changeNote: syncNote(original, state.theirs, items), authorId: user.id },
+        {
+          setupId: fork.id,
+          number: fork.revisionCount + 1,
+          values,
+          changeNote: syncNote(original, state.theirs, items),
+          authorId: user.id,
+          // Against the fork's own sheet before the sync (its current revision), as for any save.
+          changedFieldCount: diffSetupValues(state.mine.values, values).length,
+        },
         { transaction },
       );
       Object.assign(update, { currentRevisionId: revision.id, revisionCount: fork.revisionCount + 1 });

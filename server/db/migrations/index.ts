@@ -11,7 +11,9 @@ import * as votes from './20261202T0800-votes-and-search';
 import * as mailQueue from './20261202T0900-mail-preferences';
 import * as moderation from './20261202T1000-moderation';
 import * as forksOfOwner from './20261202T1100-forks-of-owner';
+import * as feedItems from './20261202T1200-feed-items';
 import * as moderationNotices from './20261202T1005-moderation-notices';
+import * as revisionChangeCounts from './20261202T1300-revision-change-counts';
 
 export type Migration = {
   name: string;
@@ -34,4 +36,6 @@ export const migrations: Migration[] = [
   { name: '20261202T1000-moderation', ...moderation },
   { name: '20261202T1005-moderation-notices', ...moderationNotices },
   { name: '20261202T1100-forks-of-owner', ...forksOfOwner },
+  { name: '20261202T1200-feed-items', ...feedItems },
+  { name: '20261202T1300-revision-change-counts', ...revisionChangeCounts },
 ];

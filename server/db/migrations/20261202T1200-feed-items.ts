@@ -1,0 +1,128 @@
+import type { MigrationContext } from '../migrator';
+
+/*
+ * The activity feed, written when things happen instead of gathered when it is read ("fan-out on
+ * write"). Reading it had meant joining every followed racer's setups and every revision of them and
+ * sorting a few thousand rows per page (14 ms of database time for a racer following 49 racers on
+ * the generated world); now a page is one range of one index plus a primary-key lookup per item.
+ *
+ * feed_items holds, per reader, one row per thing that may appear in their feed: a new setup or a
+ * revision (number > 1) by a racer they follow, or a fork of one of their setups by another racer.
+ * Rows are kept by triggers, so every way of writing (API, demo seeders, imports) feeds it:
+ *   - a setup or revision is fanned out to the owner's followers whatever its visibility, because a
+ *     setup can become public later and the feed has always shown its whole history then; whether it
+ *     may be shown (public, not hidden, not deleted, owner not suspended) is still decided when the
+ *     feed is read, so moderation and visibility changes need no feed maintenance;
+ *   - following a racer brings their newest FOLLOW_BACKFILL listed changes into my feed; anything
+ *     older than those stays on their profile;
+ *   - unfollowing removes their setups and revisions from my feed (forks of my setups stay).
+ * The rows carry the item's time so the index orders them; setups' and revisions' times never
+ * change in the product.
+ */
+
+/** How many of a racer's newest listed changes join my feed when I follow them. */
+export const FOLLOW_BACKFILL = 20;
+
+/**
+ * Fills feed_items for every existing follow (the followee's newest `perFollow` listed setups and
+ * revisions) and every listed fork of another racer's setup. Used by this migration and by the
+ * generated world of `npm run seed:scale`, which loads with the feed triggers off.
+ */
+export const BACKFILL_SQL = (perFollow: number) => `
+  WITH recent AS (
+    SELECT owner_id, created_at, kind, item_id FROM (
+      SELECT x.*, row_number() OVER (PARTITION BY x.owner_id ORDER BY x.created_at DESC, x.kind DESC, x.item_id DESC) AS n
+        FROM (SELECT s.owner_id, s.created_at, 'setup'::text AS kind, s.id AS item_id
+                FROM setups s WHERE s.visibility = 'public' AND s.hidden_at IS NULL AND s.deleted_at IS NULL
+              UNION ALL
+              SELECT s.owner_id, r.created_at, 'revision', r.id
+                FROM setups s JOIN setup_revisions r ON r.setup_id = s.id AND r.number > 1
+               WHERE s.visibility = 'public' AND s.hidden_at IS NULL AND s.deleted_at IS NULL) x) ranked
+     WHERE n <= ${Number(perFollow)})
+  INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
+  SELECT f.follower_id, r.created_at, r.kind, r.item_id, r.owner_id FROM follows f JOIN recent r ON r.owner_id = f.followee_id
+  UNION ALL
+  SELECT s.forked_from_owner_id, s.created_at, 'fork', s.id, s.owner_id FROM setups s
+   WHERE s.forked_from_owner_id IS NOT NULL AND s.forked_from_owner_id <> s.owner_id
+  ON CONFLICT DO NOTHING`;
+
+export async function up({ queryInterface: qi }: MigrationContext): Promise<void> {
+  const run = (sql: string) => qi.sequelize.query(sql);
+  // Ordered as the feed is read: newest first, then kind, then id (a page's cursor is a row of this key).
+  await run(`CREATE TABLE feed_items (
+      reader_id integer NOT NULL REFERENCES users (id) ON DELETE CASCADE,
+      created_at timestamptz NOT NULL,
+      kind text NOT NULL CHECK (kind IN ('setup', 'revision', 'fork')),
+      item_id integer NOT NULL,
+      actor_id integer NOT NULL,
+      PRIMARY KEY (reader_id, created_at, kind, item_id))`);
+
+  await run(`CREATE FUNCTION feed_fan_out_setup() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
+      SELECT f.follower_id, NEW.created_at, 'setup', NEW.id, NEW.owner_id FROM follows f WHERE f.followee_id = NEW.owner_id
+      ON CONFLICT DO NOTHING;
+      IF NEW.forked_from_owner_id IS NOT NULL AND NEW.forked_from_owner_id <> NEW.owner_id THEN
+        INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
+        VALUES (NEW.forked_from_owner_id, NEW.created_at, 'fork', NEW.id, NEW.owner_id)
+        ON CONFLICT DO NOTHING;
+      END IF;
+      RETURN NULL;
+    END $$`);
+  await run('CREATE TRIGGER setups_feed_fan_out AFTER INSERT ON setups FOR EACH ROW EXECUTE FUNCTION feed_fan_out_setup()');
+
+  await run(`CREATE FUNCTION feed_fan_out_revision() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      IF NEW.number > 1 THEN
+        INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
+        SELECT f.follower_id, NEW.created_at, 'revision', NEW.id, s.owner_id
+          FROM setups s JOIN follows f ON f.followee_id = s.owner_id
+         WHERE s.id = NEW.setup_id
+        ON CONFLICT DO NOTHING;
+      END IF;
+      RETURN NULL;
+    END $$`);
+  await run('CREATE TRIGGER setup_revisions_feed_fan_out AFTER INSERT ON setup_revisions FOR EACH ROW EXECUTE FUNCTION feed_fan_out_revision()');
+
+  // TG_ARGV[0]: how many of the followee's newest listed changes to bring in (FOLLOW_BACKFILL).
+  await run(`CREATE FUNCTION feed_follow_backfill() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
+      SELECT NEW.follower_id, x.created_at, x.kind, x.item_id, NEW.followee_id FROM (
+        (SELECT s.created_at, 'setup'::text AS kind, s.id AS item_id FROM setups s
+          WHERE s.owner_id = NEW.followee_id AND s.visibility = 'public' AND s.hidden_at IS NULL AND s.deleted_at IS NULL
+          ORDER BY s.created_at DESC LIMIT TG_ARGV[0]::integer)
+        UNION ALL
+        (SELECT r.created_at, 'revision', r.id FROM setups s JOIN setup_revisions r ON r.setup_id = s.id AND r.number > 1
+          WHERE s.owner_id = NEW.followee_id AND s.visibility = 'public' AND s.hidden_at IS NULL AND s.deleted_at IS NULL
+          ORDER BY r.created_at DESC LIMIT TG_ARGV[0]::integer)) x
+      ORDER BY x.created_at DESC, x.kind DESC, x.item_id DESC
+      LIMIT TG_ARGV[0]::integer
+      ON CONFLICT DO NOTHING;
+      RETURN NULL;
+    END $$`);
+  await run(`CREATE TRIGGER follows_feed_backfill AFTER INSERT ON follows FOR EACH ROW EXECUTE FUNCTION feed_follow_backfill('${FOLLOW_BACKFILL}')`);
+
+  // A racer's forks of my setups stay in my feed after I unfollow them: they are about my setups.
+  await run(`CREATE FUNCTION feed_unfollow() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      DELETE FROM feed_items WHERE reader_id = OLD.follower_id AND actor_id = OLD.followee_id AND kind <> 'fork';
+      RETURN NULL;
+    END $$`);
+  await run('CREATE TRIGGER follows_feed_unfollow AFTER DELETE ON follows FOR EACH ROW EXECUTE FUNCTION feed_unfollow()');
+
+  await run(BACKFILL_SQL(FOLLOW_BACKFILL));
+}
+
+export async function down({ queryInterface: qi }: MigrationContext): Promise<void> {
+  const run = (sql: string) => qi.sequelize.query(sql);
+  await run('DROP TRIGGER IF EXISTS follows_feed_unfollow ON follows');
+  await run('DROP TRIGGER IF EXISTS follows_feed_backfill ON follows');
+  await run('DROP TRIGGER IF EXISTS setup_revisions_feed_fan_out ON setup_revisions');
+  await run('DROP TRIGGER IF EXISTS setups_feed_fan_out ON setups');
+  await run('DROP FUNCTION IF EXISTS feed_unfollow()');
+  await run('DROP FUNCTION IF EXISTS feed_follow_backfill()');
+  await run('DROP FUNCTION IF EXISTS feed_fan_out_revision()');
+  await run('DROP FUNCTION IF EXISTS feed_fan_out_setup()');
+  await run('DROP TABLE IF EXISTS feed_items');
+}
