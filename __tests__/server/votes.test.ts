@@ -143,6 +143,90 @@ describe('who may vote on what', () => {
   });
 });
 
+describe('the answer to a vote', () => {
+  async function read(setupId: number, s: SessionAgent) {
+    return setupVotesResponseSchema.parse((await s.agent.get(`/api/setups/${setupId}/votes`).expect(200)).body).votes;
+  }
+
+  // The write statement recounts the voted track type itself (the trigger runs after it); the
+  // source of truth it is checked against is the trigger-maintained counts that a read returns.
+  it('is exactly what a read returns afterwards, with other racers\' votes on the same and other track types', async () => {
+    const setup = await publicSetup();
+    const others = await Promise.all(Array.from({ length: 4 }, () => createRacer(t.db, { prefix: 'crowd' })));
+    await t.db.sequelize.query(
+      `INSERT INTO setup_votes (user_id, setup_id, track_type, works)
+       SELECT u.id, :setupId, tt, (u.id + length(tt)) % 3 <> 0 FROM users u, unnest(ARRAY['loose-dusty', 'turf']) AS tt WHERE u.id IN (:ids)`,
+      { replacements: { setupId: setup.id, ids: others.map((o) => o.user.id) } },
+    );
+    const steps: Array<[string, boolean | null]> = [
+      ['loose-dusty', true], ['loose-dusty', true], ['loose-dusty', false], ['turf', false], ['loose-dusty', null], ['loose-dusty', null], ['loamy', null], ['loamy', true],
+    ];
+    for (const [trackType, works] of steps) {
+      const res = works === null ? await withdraw(voter, setup.id, trackType).expect(200) : await vote(voter, setup.id, trackType, works).expect(200);
+      const answered = setupVotesResponseSchema.parse(res.body).votes;
+      expect(answered).toEqual(await read(setup.id, voter));
+      expect(tallyOf(answered, trackType).myVote).toBe(works === null ? null : works ? 'works' : 'fails');
+    }
+    await expectCountsEqualRecount();
+  });
+
+  it('agrees with itself when one racer sends the same vote, or both choices, several times at once', async () => {
+    const setup = await publicSetup();
+    const same = await Promise.all(Array.from({ length: 6 }, () => vote(voter, setup.id, 'hard-packed', true).expect(200)));
+    for (const res of same) expect(tallyOf(setupVotesResponseSchema.parse(res.body).votes, 'hard-packed')).toMatchObject({ works: 1, fails: 0, myVote: 'works' });
+
+    const mixed = await Promise.all(Array.from({ length: 6 }, (_, i) => vote(voter, setup.id, 'indoor-clay', i % 2 === 0).expect(200)));
+    for (const res of mixed) {
+      const row = tallyOf(setupVotesResponseSchema.parse(res.body).votes, 'indoor-clay');
+      expect(row.works + row.fails).toBe(1);
+      expect(row.myVote).toBe(row.works === 1 ? 'works' : 'fails');
+    }
+    const after = tallyOf(await read(setup.id, voter), 'indoor-clay');
+    expect(after.works + after.fails).toBe(1);
+    await expectCountsEqualRecount();
+  });
+
+  it('refuses without writing: the author of a hidden or private setup is told it is theirs, a deleted one is not found', async () => {
+    const hidden = await publicSetup();
+    await t.db.models.Setup.update({ hiddenAt: new Date() }, { where: { id: hidden.id } });
+    expect((await vote(author, hidden.id, 'turf', true).expect(403)).body.error).toMatchObject({ code: 'forbidden', message: OWN_SETUP_MESSAGE });
+    const priv = await publicSetup('private');
+    expect((await vote(author, priv.id, 'turf', false).expect(403)).body.error.message).toBe(OWN_SETUP_MESSAGE);
+    expect((await withdraw(author, priv.id, 'turf').expect(403)).body.error.message).toBe(OWN_SETUP_MESSAGE);
+    const deleted = await publicSetup();
+    await author.agent.delete(`/api/setups/${deleted.id}`).set('X-CSRF-Token', author.csrf).expect(204);
+    await vote(author, deleted.id, 'turf', true).expect(404);
+    const [{ n }] = await t.db.sequelize.query<{ n: number }>('SELECT count(*)::int AS n FROM setup_votes WHERE setup_id IN (:ids)', {
+      replacements: { ids: [hidden.id, priv.id, deleted.id] },
+      type: QueryTypes.SELECT,
+    });
+    expect(n).toBe(0);
+  });
+
+  it('withdrawing follows the same rules: hidden is not found for racers and closed for moderators, private is not found', async () => {
+    const hidden = await publicSetup();
+    await vote(voter, hidden.id, 'turf', true).expect(200);
+    await t.db.models.Setup.update({ hiddenAt: new Date() }, { where: { id: hidden.id } });
+    await withdraw(voter, hidden.id, 'turf').expect(404);
+    const mod = await createRacer(t.db, { role: 'moderator' });
+    const modSession = await signIn(t.app, mod.handle, mod.password);
+    expect((await withdraw(modSession, hidden.id, 'turf').expect(403)).body.error.message).toBe('Voting is closed while moderators review this setup.');
+    const priv = await publicSetup('private');
+    await withdraw(modSession, priv.id, 'turf').expect(404);
+    await vote(modSession, priv.id, 'turf', true).expect(404);
+    const [{ n }] = await t.db.sequelize.query<{ n: number }>('SELECT count(*)::int AS n FROM setup_votes WHERE setup_id = :id', {
+      replacements: { id: hidden.id },
+      type: QueryTypes.SELECT,
+    });
+    expect(n).toBe(1);
+  });
+
+  it.each([['3000000000'], ['-1'], ['1.5'], ['99999999999999999999']])('answers 404 for the setup id %s', async (id) => {
+    await voter.agent.put(`/api/setups/${id}/votes/turf`).set('X-CSRF-Token', voter.csrf).send({ works: true }).expect(404);
+    await voter.agent.delete(`/api/setups/${id}/votes/turf`).set('X-CSRF-Token', voter.csrf).expect(404);
+  });
+});
+
 describe('bad input gets a clear 400 and changes nothing', () => {
   it('names the track types when the one given is not on the list', async () => {
     const setup = await publicSetup();
