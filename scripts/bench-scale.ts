@@ -265,8 +265,8 @@ async function main(): Promise<void> {
     }
 
     const f = (n: number, w: number, d = 0) => n.toFixed(d).padStart(w);
-    console.log('| route             | conns | req/s | p50 ms | p97.5 ms | p99 ms | req/s ÷ bare | p99 ÷ bare | non-2xx | target |');
-    console.log('| ----------------- | ----- | ----- | ------ | -------- | ------ | ------------ | ---------- | ------- | ------ |');
+    console.log('| route              | conns | req/s | p50 ms | p97.5 ms | p99 ms | req/s ÷ bare | p99 ÷ bare | non-2xx | target |');
+    console.log('| ------------------ | ----- | ----- | ------ | -------- | ------ | ------------ | ---------- | ------- | ------ |');
     for (const row of results) {
       const ceiling = results.find((x) => x.kind === 'ceiling' && x.connections === row.connections)!.r;
       const tput = row.r.reqPerSec / ceiling.reqPerSec;
@@ -274,7 +274,7 @@ async function main(): Promise<void> {
       const met =
         row.kind === 'ceiling' || row.kind === 'floor' ? '—' : row.kind === 'read' ? (tput >= 0.5 && tail <= 2.5 ? 'met' : 'missed') : tput >= 0.25 ? 'met' : 'missed';
       console.log(
-        `| ${row.name.padEnd(17)} | ${f(row.connections, 5)} | ${f(row.r.reqPerSec, 5)} | ${f(row.r.p50, 6)} | ${f(row.r.p97_5, 8)} | ${f(row.r.p99, 6)} | ${f(tput, 12, 2)} | ${f(tail, 10, 2)} | ${f(row.r.non2xx + row.r.errors, 7)} | ${met.padEnd(6)} |`,
+        `| ${row.name.padEnd(18)} | ${f(row.connections, 5)} | ${f(row.r.reqPerSec, 5)} | ${f(row.r.p50, 6)} | ${f(row.r.p97_5, 8)} | ${f(row.r.p99, 6)} | ${f(tput, 12, 2)} | ${f(tail, 10, 2)} | ${f(row.r.non2xx + row.r.errors, 7)} | ${met.padEnd(6)} |`,
       );
     }
     // Requests autocannon abandoned at its deadline are still being served: let them finish

@@ -7,6 +7,7 @@ import { authenticateWithPassword, type AccountDeps } from '../services/accounts
 import { linkGithub, signInWithGithub, type GithubProfile } from '../services/githubAccounts';
 import { clientKeyFor } from '../services/signInThrottle';
 import { FAKE_GITHUB_MOUNT } from './fakeGithub';
+import { sessionUserHandoff } from './sessionUser';
 
 declare global {
   // eslint-disable-next-line @typescript-eslint/no-namespace
@@ -73,7 +74,13 @@ export function createPassport(deps: AccountDeps) {
   }
 
   passport.serializeUser((user, done) => done(null, user.id));
+  const handoff = sessionUserHandoff(deps.db);
   passport.deserializeUser((id: number, done) => {
+    // Usually read with the session a moment ago (sessionUser.ts); otherwise read now.
+    // Only ever a user id we wrote; anything else names nobody rather than failing the request.
+    if (!Number.isInteger(id) || id < 1 || id > 2_147_483_647) return done(null, false);
+    const loaded = handoff.take(id);
+    if (loaded) return done(null, loaded.isSuspended() ? false : loaded);
     deps.db.models.User.findByPk(id).then(
       // A suspended racer's existing sessions stop working at once.
       (user) => done(null, user && !user.isSuspended() ? user : false),
