@@ -73,6 +73,21 @@ describe('the racer of a signed-in request', () => {
   });
 });
 
+describe('anonymous reads', () => {
+  // Skipping the session machinery for them must change nothing anyone can see.
+  it('answer as before without a session; the CSRF token route still starts one and writes are still checked', async () => {
+    const discover = await request(t.app).get('/api/discover').expect(200);
+    expect(discover.headers['set-cookie']).toBeUndefined();
+    expect((await request(t.app).get('/api/me').expect(200)).body.user).toBeNull();
+    expect((await request(t.app).get('/api/feed')).status).toBe(401);
+
+    const csrf = await request(t.app).get('/api/auth/csrf').expect(200);
+    expect(String(csrf.headers['set-cookie'])).toContain(`${SESSION_COOKIE}=`);
+    // A write without a session gets the CSRF refusal, as before (its session was looked for).
+    expect((await request(t.app).post('/api/auth/sign-out').send({})).status).toBe(403);
+  });
+});
+
 describe('the hand-off between the session store and passport', () => {
   it('hands a row over once, and never one older than a second', async () => {
     const handoff = sessionUserHandoff(t.db);
