@@ -9,8 +9,9 @@
  * warm-up. The table gives req/s and latency percentiles, and each route's ratio to the bare route
  * at the same connection count: req/s ÷ bare req/s, and p99 ÷ bare p99. Targets (issue 6): reads
  * ≥ 0.5× throughput and p99 ≤ 2.5×; writes ≥ 0.25× throughput. The "app floor" row is the
- * product's cheapest request (GET /api/health: the whole middleware stack and `SELECT 1`), so the
- * table shows how much of a gap is the stack and how much the route. Absolute figures drift on a
+ * product's cheapest request (GET /api/health: the whole middleware stack and `SELECT 1`), and the
+ * "signed-in floor" its cheapest signed-in one (GET /api/me: the stack and the session with its
+ * racer), so the table shows how much of a gap is the stack and how much the route. Absolute figures drift on a
  * shared machine; compare the ratios of one run.
  */
 import { spawn } from 'node:child_process';
@@ -191,6 +192,9 @@ async function main(): Promise<void> {
       // (helmet, compression, logging, rate limit, session, CSRF, router) and one `SELECT 1`. No
       // route of the app can be cheaper; its ratio shows what the stack alone costs.
       { name: 'app floor (health)', headers: {}, target: { kind: 'floor', method: 'GET', path: '/api/health' } },
+      // The same for a signed-in request: GET /api/me reads the session and its racer (one
+      // statement) and answers who I am. The feed, fork and vote cannot be cheaper than this.
+      { name: 'signed-in floor (me)', headers: signed, target: { kind: 'floor', method: 'GET', path: '/api/me' } },
       { name: 'home feed', headers: signed, target: { kind: 'read', method: 'GET', path: '/api/feed' } },
       { name: 'discover best-for', headers: {}, target: { kind: 'read', method: 'GET', path: '/api/discover?sort=best-for&bestFor=loose-dusty' } },
       {
@@ -265,8 +269,8 @@ async function main(): Promise<void> {
     }
 
     const f = (n: number, w: number, d = 0) => n.toFixed(d).padStart(w);
-    console.log('| route              | conns | req/s | p50 ms | p97.5 ms | p99 ms | req/s ÷ bare | p99 ÷ bare | non-2xx | target |');
-    console.log('| ------------------ | ----- | ----- | ------ | -------- | ------ | ------------ | ---------- | ------- | ------ |');
+    console.log('| route                | conns | req/s | p50 ms | p97.5 ms | p99 ms | req/s ÷ bare | p99 ÷ bare | non-2xx | target |');
+    console.log('| -------------------- | ----- | ----- | ------ | -------- | ------ | ------------ | ---------- | ------- | ------ |');
     for (const row of results) {
       const ceiling = results.find((x) => x.kind === 'ceiling' && x.connections === row.connections)!.r;
       const tput = row.r.reqPerSec / ceiling.reqPerSec;
@@ -274,7 +278,7 @@ async function main(): Promise<void> {
       const met =
         row.kind === 'ceiling' || row.kind === 'floor' ? '—' : row.kind === 'read' ? (tput >= 0.5 && tail <= 2.5 ? 'met' : 'missed') : tput >= 0.25 ? 'met' : 'missed';
       console.log(
-        `| ${row.name.padEnd(18)} | ${f(row.connections, 5)} | ${f(row.r.reqPerSec, 5)} | ${f(row.r.p50, 6)} | ${f(row.r.p97_5, 8)} | ${f(row.r.p99, 6)} | ${f(tput, 12, 2)} | ${f(tail, 10, 2)} | ${f(row.r.non2xx + row.r.errors, 7)} | ${met.padEnd(6)} |`,
+        `| ${row.name.padEnd(20)} | ${f(row.connections, 5)} | ${f(row.r.reqPerSec, 5)} | ${f(row.r.p50, 6)} | ${f(row.r.p97_5, 8)} | ${f(row.r.p99, 6)} | ${f(tput, 12, 2)} | ${f(tail, 10, 2)} | ${f(row.r.non2xx + row.r.errors, 7)} | ${met.padEnd(6)} |`,
       );
     }
     // Requests autocannon abandoned at its deadline are still being served: let them finish

@@ -324,6 +324,9 @@ export async function seedScale(
 
     await timed(timings, 'feed_items', log, async () => {
       for (const [table, trigger] of FEED_TRIGGERS) await q(`ALTER TABLE ${table} ENABLE TRIGGER ${trigger}`);
+      // Statistics of the rows just written first: without them the planner joins a million
+      // revisions as if the tables were empty, and the backfill takes minutes instead of about one.
+      await q('ANALYZE setups, setup_revisions, follows');
       return (await q(FEED_BACKFILL_SQL(FOLLOW_BACKFILL))).rowCount ?? 0;
     });
 

@@ -66,7 +66,8 @@ const SAFE_METHODS = new Set(['GET', 'HEAD', 'OPTIONS']);
  * CSRF token, OAuth), and any request that carries a session cookie. A read without one is anonymous.
  */
 function needsSession(req: Request): boolean {
-  return !SAFE_METHODS.has(req.method) || req.path.startsWith('/auth/') || (req.headers.cookie ?? '').includes(`${SESSION_COOKIE}=`);
+  // Routes match case-insensitively, so /AUTH/csrf is the CSRF route too.
+  return !SAFE_METHODS.has(req.method) || req.path.toLowerCase().startsWith('/auth/') || (req.headers.cookie ?? '').includes(`${SESSION_COOKIE}=`);
 }
 
 function apiRouter(deps: RouterDeps): Router {

@@ -1,3 +1,4 @@
+import type { PoolClient } from 'pg';
 import request from 'supertest';
 import type { FeedItem, FeedPage, FollowList } from '../../shared/types/community';
 import { FOLLOW_BACKFILL } from '../../server/db/migrations/20261202T1200-feed-items';
@@ -200,8 +201,6 @@ describe('the activity feed', () => {
       [setup, juno.id],
     );
     await t.db.pool.query(`UPDATE setups SET created_at = timestamptz '2026-11-01 08:00:08Z' WHERE id IN ($1, $2)`, [setup, fork]);
-    // The feed keeps its own copy of each item's time (setups' times never change in the product).
-    await t.db.pool.query(`UPDATE feed_items SET created_at = timestamptz '2026-11-01 08:00:08Z' WHERE kind IN ('setup', 'fork') AND item_id IN ($1, $2)`, [setup, fork]);
     const kinds = { fork: 0, revision: 1, setup: 2 };
     // Expected order: newest first, then kind, then id, all descending (common practice, no source).
     const expected = [
@@ -258,6 +257,70 @@ describe('the activity feed', () => {
 
     await write(me, 'delete', `/api/racers/${juno.handle}/follow`).expect(200);
     expect((await feedPage(me)).items.map(key)).toEqual([`fork:${fork}`]);
+  });
+
+  it('copies nothing of private setups into followers\' feeds, and brings a setup in when moderators restore it', async () => {
+    const [me, juno] = [await racer('me'), await racer('juno')];
+    await follow(me, juno);
+    const draft = await publicSetup(juno, 'Still a draft', stoat8n, 'private');
+    await revise(juno, draft, 'Private tinkering');
+    const rows = async () => (await t.db.pool.query<{ n: number }>('SELECT count(*)::int AS n FROM feed_items WHERE reader_id = $1', [me.id])).rows[0].n;
+    expect(await rows()).toBe(0);
+
+    const shown = await publicSetup(juno, 'Hidden, then restored');
+    await t.db.models.Setup.update({ hiddenAt: new Date() }, { where: { id: shown } });
+    const change = await revise(juno, shown, 'Saved while hidden');
+    expect((await feedPage(me)).items).toEqual([]);
+    await t.db.models.Setup.update({ hiddenAt: null }, { where: { id: shown } });
+    expect((await feedPage(me)).items.map(key)).toEqual([`revision:${change}`, `setup:${shown}`]);
+  });
+
+  describe('a save and a follow or unfollow of its racer at the same moment', () => {
+    /** Runs `racing` on a second connection while `first` holds its transaction open, and checks that it waited. */
+    async function whileOpen(first: (c: PoolClient) => Promise<void>, racing: string, params: unknown[]) {
+      const [a, b] = [await t.db.pool.connect(), await t.db.pool.connect()];
+      try {
+        await a.query('BEGIN');
+        await first(a);
+        const pid = (await b.query<{ pid: number }>('SELECT pg_backend_pid() AS pid')).rows[0].pid;
+        const raced = b.query(racing, params);
+        for (let i = 0; ; i++) {
+          const { rows } = await t.db.pool.query<{ w: string | null }>('SELECT wait_event_type AS w FROM pg_stat_activity WHERE pid = $1', [pid]);
+          if (rows[0]?.w === 'Lock') break;
+          if (i > 200) throw new Error('the racing statement never waited for the open save');
+          await new Promise((r) => setTimeout(r, 25));
+        }
+        await a.query('COMMIT');
+        await raced;
+      } finally {
+        a.release();
+        b.release();
+      }
+    }
+    const saveRevision = (setupId: number, authorId: number, note: string) => async (c: PoolClient) => {
+      await c.query(
+        `INSERT INTO setup_revisions (setup_id, number, values, change_note, author_id, changed_field_count)
+         SELECT $1, 50, values, $3, $2, 0 FROM setup_revisions WHERE setup_id = $1 AND number = 1`,
+        [setupId, authorId, note],
+      );
+    };
+
+    it('a new follower still gets the change saved as they followed', async () => {
+      const [me, juno] = [await racer('me'), await racer('juno')];
+      const sheet = await publicSetup(juno, 'Raced sheet');
+      await whileOpen(saveRevision(sheet, juno.id, 'Saved as I followed'), 'INSERT INTO follows (follower_id, followee_id) VALUES ($1, $2)', [me.id, juno.id]);
+      const items = (await feedPage(me)).items;
+      expect(items.map((i) => i.kind)).toEqual(['revision', 'setup']);
+      expect(items[0]).toMatchObject({ revision: { number: 50, changeNote: 'Saved as I followed' } });
+    });
+
+    it('an unfollow takes out the change saved as it happened', async () => {
+      const [me, juno] = [await racer('me'), await racer('juno')];
+      const sheet = await publicSetup(juno, 'Raced sheet');
+      await follow(me, juno);
+      await whileOpen(saveRevision(sheet, juno.id, 'Saved as they unfollowed'), 'DELETE FROM follows WHERE follower_id = $1 AND followee_id = $2', [me.id, juno.id]);
+      expect((await feedPage(me)).items).toEqual([]);
+    });
   });
 
   it('shows the whole history of a setup made public after its revisions were saved', async () => {

@@ -83,6 +83,8 @@ describe('anonymous reads', () => {
 
     const csrf = await request(t.app).get('/api/auth/csrf').expect(200);
     expect(String(csrf.headers['set-cookie'])).toContain(`${SESSION_COOKIE}=`);
+    // Routes match without regard to case; so does the choice to load the session.
+    expect((await request(t.app).get('/api/AUTH/csrf')).status).toBe(200);
     // A write without a session gets the CSRF refusal, as before (its session was looked for).
     expect((await request(t.app).post('/api/auth/sign-out').send({})).status).toBe(403);
   });

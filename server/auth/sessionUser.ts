@@ -1,3 +1,4 @@
+import { DataTypes } from 'sequelize';
 import type { Database } from '../db/database';
 import type { User } from '../models/User';
 
@@ -33,7 +34,9 @@ export function sessionUserHandoff(db: Database): SessionUserHandoff {
   let handoff = handoffs.get(db);
   if (handoff) return handoff;
   const model = db.models.User;
+  // Columns only: a VIRTUAL attribute has none (Sequelize computes it from the others).
   const userColumns = Object.entries(model.getAttributes())
+    .filter(([, definition]) => !(definition.type instanceof DataTypes.VIRTUAL))
     .map(([attribute, definition]) => `u."${definition.field ?? attribute}" AS "${attribute}"`)
     .join(', ');
   const rows = new Map<number, { row: Row; at: number }>();

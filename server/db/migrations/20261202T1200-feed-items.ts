@@ -9,19 +9,30 @@ import type { MigrationContext } from '../migrator';
  * feed_items holds, per reader, one row per thing that may appear in their feed: a new setup or a
  * revision (number > 1) by a racer they follow, or a fork of one of their setups by another racer.
  * Rows are kept by triggers, so every way of writing (API, demo seeders, imports) feeds it:
- *   - a setup or revision is fanned out to the owner's followers whatever its visibility, because a
- *     setup can become public later and the feed has always shown its whole history then; whether it
- *     may be shown (public, not hidden, not deleted, owner not suspended) is still decided when the
- *     feed is read, so moderation and visibility changes need no feed maintenance;
+ *   - a setup or revision is fanned out to the owner's followers when it is written while the setup
+ *     is listed (public, not hidden, not deleted); new setups start private, and a racer's private
+ *     work never fills their followers' feeds with rows to skip;
+ *   - a setup that becomes listed (shared, restored by moderators, undeleted) is fanned out then,
+ *     with its newest FOLLOW_BACKFILL revisions;
  *   - following a racer brings their newest FOLLOW_BACKFILL listed changes into my feed; anything
- *     older than those stays on their profile;
- *   - unfollowing removes their setups and revisions from my feed (forks of my setups stay).
- * The rows carry the item's time so the index orders them; setups' and revisions' times never
- * change in the product.
+ *     older stays in each setup's history;
+ *   - unfollowing removes their setups and revisions from my feed (forks of my setups stay);
+ *   - a fork of my setup by another racer is written for me whatever its visibility (one row).
+ * Whether an item may be shown now (still listed, owner not suspended) is decided when the feed is
+ * read, so a setup made private or hidden later needs no feed upkeep.
+ * A racer's saves and follows or unfollows of that racer are serialised on an advisory lock
+ * (FEED_LOCK_SPACE, racer id): without it a save and a follow committing at the same moment would
+ * each miss the other (the item never reaches the new follower), and an unfollow could delete
+ * before a save's fan-out writes. Saves share the lock; follows take it alone.
+ * The rows carry the item's time so the index orders them; the demo seeders back-date setups after
+ * writing them, so a change of a setup's time is carried over (by primary key).
  */
 
 /** How many of a racer's newest listed changes join my feed when I follow them. */
 export const FOLLOW_BACKFILL = 20;
+
+/** The first key of the feed's advisory locks (the second is a racer's id); any number no other lock uses. */
+const FEED_LOCK_SPACE = 1702;
 
 /**
  * Fills feed_items for every existing follow (the followee's newest `perFollow` listed setups and
@@ -57,11 +68,15 @@ export async function up({ queryInterface: qi }: MigrationContext): Promise<void
       actor_id integer NOT NULL,
       PRIMARY KEY (reader_id, created_at, kind, item_id))`);
 
+  const listed = (row: string) => `${row}.visibility = 'public' AND ${row}.hidden_at IS NULL AND ${row}.deleted_at IS NULL`;
   await run(`CREATE FUNCTION feed_fan_out_setup() RETURNS trigger LANGUAGE plpgsql AS $$
     BEGIN
-      INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
-      SELECT f.follower_id, NEW.created_at, 'setup', NEW.id, NEW.owner_id FROM follows f WHERE f.followee_id = NEW.owner_id
-      ON CONFLICT DO NOTHING;
+      IF ${listed('NEW')} THEN
+        PERFORM pg_advisory_xact_lock_shared(${FEED_LOCK_SPACE}, NEW.owner_id);
+        INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
+        SELECT f.follower_id, NEW.created_at, 'setup', NEW.id, NEW.owner_id FROM follows f WHERE f.followee_id = NEW.owner_id
+        ON CONFLICT DO NOTHING;
+      END IF;
       IF NEW.forked_from_owner_id IS NOT NULL AND NEW.forked_from_owner_id <> NEW.owner_id THEN
         INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
         VALUES (NEW.forked_from_owner_id, NEW.created_at, 'fork', NEW.id, NEW.owner_id)
@@ -72,29 +87,67 @@ export async function up({ queryInterface: qi }: MigrationContext): Promise<void
   await run('CREATE TRIGGER setups_feed_fan_out AFTER INSERT ON setups FOR EACH ROW EXECUTE FUNCTION feed_fan_out_setup()');
 
   await run(`CREATE FUNCTION feed_fan_out_revision() RETURNS trigger LANGUAGE plpgsql AS $$
+    DECLARE
+      setup_owner integer;
     BEGIN
       IF NEW.number > 1 THEN
-        INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
-        SELECT f.follower_id, NEW.created_at, 'revision', NEW.id, s.owner_id
-          FROM setups s JOIN follows f ON f.followee_id = s.owner_id
-         WHERE s.id = NEW.setup_id
-        ON CONFLICT DO NOTHING;
+        SELECT s.owner_id INTO setup_owner FROM setups s WHERE s.id = NEW.setup_id AND ${listed('s')};
+        IF setup_owner IS NOT NULL THEN
+          PERFORM pg_advisory_xact_lock_shared(${FEED_LOCK_SPACE}, setup_owner);
+          INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
+          SELECT f.follower_id, NEW.created_at, 'revision', NEW.id, setup_owner FROM follows f WHERE f.followee_id = setup_owner
+          ON CONFLICT DO NOTHING;
+        END IF;
       END IF;
       RETURN NULL;
     END $$`);
   await run('CREATE TRIGGER setup_revisions_feed_fan_out AFTER INSERT ON setup_revisions FOR EACH ROW EXECUTE FUNCTION feed_fan_out_revision()');
 
+  // TG_ARGV[0]: how many of its newest revisions come along (FOLLOW_BACKFILL).
+  await run(`CREATE FUNCTION feed_setup_listed() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      PERFORM pg_advisory_xact_lock_shared(${FEED_LOCK_SPACE}, NEW.owner_id);
+      INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
+      SELECT f.follower_id, x.created_at, x.kind, x.item_id, NEW.owner_id
+        FROM follows f
+        CROSS JOIN (SELECT NEW.created_at, 'setup'::text AS kind, NEW.id AS item_id
+                    UNION ALL
+                    (SELECT r.created_at, 'revision', r.id FROM setup_revisions r WHERE r.setup_id = NEW.id AND r.number > 1
+                      ORDER BY r.number DESC LIMIT TG_ARGV[0]::integer)) x
+       WHERE f.followee_id = NEW.owner_id
+      ON CONFLICT DO NOTHING;
+      RETURN NULL;
+    END $$`);
+  await run(`CREATE TRIGGER setups_feed_listed AFTER UPDATE OF visibility, hidden_at, deleted_at ON setups FOR EACH ROW
+             WHEN (${listed('NEW')} AND NOT (${listed('OLD')}))
+             EXECUTE FUNCTION feed_setup_listed('${FOLLOW_BACKFILL}')`);
+
+  // Only the demo seeders move a setup's time; each copy is found by its primary key.
+  await run(`CREATE FUNCTION feed_setup_moved() RETURNS trigger LANGUAGE plpgsql AS $$
+    BEGIN
+      UPDATE feed_items fi SET created_at = NEW.created_at
+        FROM follows f
+       WHERE f.followee_id = NEW.owner_id AND fi.reader_id = f.follower_id
+         AND fi.created_at = OLD.created_at AND fi.kind = 'setup' AND fi.item_id = NEW.id;
+      UPDATE feed_items SET created_at = NEW.created_at
+       WHERE reader_id = NEW.forked_from_owner_id AND created_at = OLD.created_at AND kind = 'fork' AND item_id = NEW.id;
+      RETURN NULL;
+    END $$`);
+  await run(`CREATE TRIGGER setups_feed_moved AFTER UPDATE OF created_at ON setups FOR EACH ROW
+             WHEN (OLD.created_at IS DISTINCT FROM NEW.created_at) EXECUTE FUNCTION feed_setup_moved()`);
+
   // TG_ARGV[0]: how many of the followee's newest listed changes to bring in (FOLLOW_BACKFILL).
   await run(`CREATE FUNCTION feed_follow_backfill() RETURNS trigger LANGUAGE plpgsql AS $$
     BEGIN
+      PERFORM pg_advisory_xact_lock(${FEED_LOCK_SPACE}, NEW.followee_id);
       INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
       SELECT NEW.follower_id, x.created_at, x.kind, x.item_id, NEW.followee_id FROM (
         (SELECT s.created_at, 'setup'::text AS kind, s.id AS item_id FROM setups s
-          WHERE s.owner_id = NEW.followee_id AND s.visibility = 'public' AND s.hidden_at IS NULL AND s.deleted_at IS NULL
+          WHERE s.owner_id = NEW.followee_id AND ${listed('s')}
           ORDER BY s.created_at DESC LIMIT TG_ARGV[0]::integer)
         UNION ALL
         (SELECT r.created_at, 'revision', r.id FROM setups s JOIN setup_revisions r ON r.setup_id = s.id AND r.number > 1
-          WHERE s.owner_id = NEW.followee_id AND s.visibility = 'public' AND s.hidden_at IS NULL AND s.deleted_at IS NULL
+          WHERE s.owner_id = NEW.followee_id AND ${listed('s')}
           ORDER BY r.created_at DESC LIMIT TG_ARGV[0]::integer)) x
       ORDER BY x.created_at DESC, x.kind DESC, x.item_id DESC
       LIMIT TG_ARGV[0]::integer
@@ -106,6 +159,7 @@ export async function up({ queryInterface: qi }: MigrationContext): Promise<void
   // A racer's forks of my setups stay in my feed after I unfollow them: they are about my setups.
   await run(`CREATE FUNCTION feed_unfollow() RETURNS trigger LANGUAGE plpgsql AS $$
     BEGIN
+      PERFORM pg_advisory_xact_lock(${FEED_LOCK_SPACE}, OLD.followee_id);
       DELETE FROM feed_items WHERE reader_id = OLD.follower_id AND actor_id = OLD.followee_id AND kind <> 'fork';
       RETURN NULL;
     END $$`);
@@ -119,10 +173,14 @@ export async function down({ queryInterface: qi }: MigrationContext): Promise<vo
   await run('DROP TRIGGER IF EXISTS follows_feed_unfollow ON follows');
   await run('DROP TRIGGER IF EXISTS follows_feed_backfill ON follows');
   await run('DROP TRIGGER IF EXISTS setup_revisions_feed_fan_out ON setup_revisions');
+  await run('DROP TRIGGER IF EXISTS setups_feed_moved ON setups');
+  await run('DROP TRIGGER IF EXISTS setups_feed_listed ON setups');
   await run('DROP TRIGGER IF EXISTS setups_feed_fan_out ON setups');
   await run('DROP FUNCTION IF EXISTS feed_unfollow()');
   await run('DROP FUNCTION IF EXISTS feed_follow_backfill()');
   await run('DROP FUNCTION IF EXISTS feed_fan_out_revision()');
+  await run('DROP FUNCTION IF EXISTS feed_setup_moved()');
+  await run('DROP FUNCTION IF EXISTS feed_setup_listed()');
   await run('DROP FUNCTION IF EXISTS feed_fan_out_setup()');
   await run('DROP TABLE IF EXISTS feed_items');
 }
