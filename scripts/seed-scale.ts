@@ -138,7 +138,11 @@ export async function seedScale(
 
     await timed(timings, 'cars', log, async () => {
       await q(`CREATE TEMP TABLE scale_kits ON COMMIT DROP AS
-                 SELECT row_number() OVER (ORDER BY id)::int - 1 AS idx, id, name, vehicle_class, template_version, stock_values FROM kits`);
+                 SELECT row_number() OVER (ORDER BY id)::int - 1 AS idx, id, name, vehicle_class, template_version, stock_values,
+                        -- How many of the fields the revisions vary this kit's sheet has (see setup_revisions).
+                        (stock_values ->> 'shock.front.oil' IS NOT NULL)::int + (stock_values ->> 'shock.rear.oil' IS NOT NULL)::int
+                          + (stock_values ->> 'susp.rear.ride-height' IS NOT NULL)::int AS varied_fields
+                   FROM kits`);
       const res = await q(
         `INSERT INTO cars (owner_id, kit_id, nickname, stock, created_at, updated_at)
          SELECT r.id, k.id, format('%s no. %s', k.name, r.rank), false, now() - interval '2 years', now()
@@ -245,9 +249,7 @@ export async function seedScale(
                                  (k.stock_values ->> 'shock.front.oil')::int + 50 * ((s.g + n.i) % 3 - 1),
                                  (k.stock_values ->> 'shock.rear.oil')::int + 50 * ((s.g + 2 * n.i) % 3 - 1), n.i) END,
                 r.id,
-                CASE WHEN n.i = 0 THEN 0
-                     ELSE (k.stock_values ->> 'shock.front.oil' IS NOT NULL)::int + (k.stock_values ->> 'shock.rear.oil' IS NOT NULL)::int
-                          + (k.stock_values ->> 'susp.rear.ride-height' IS NOT NULL)::int END,
+                CASE WHEN n.i = 0 THEN 0 ELSE k.varied_fields END,
                 s.created + n.i * interval '1 hour'
            FROM scale_setups s
            JOIN scale_racers r ON r.rank = s.owner_rank
