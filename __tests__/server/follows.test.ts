@@ -2,7 +2,7 @@ import type { PoolClient } from 'pg';
 import request from 'supertest';
 import type { FeedItem, FeedPage, FollowList } from '../../shared/types/community';
 import { FOLLOW_BACKFILL } from '../../server/db/migrations/20261202T1200-feed-items';
-import { FEED_PAGE_SIZE } from '../../server/services/feed';
+import { FEED_PAGE_SIZE, trimFeeds } from '../../server/services/feed';
 import { FOLLOW_PAGE_SIZE } from '../../server/services/follows';
 import { createRacer, signIn, type SessionAgent } from '../support/accounts';
 import { carWithStockSetup, ensureCatalog, kitId } from '../support/garage';
@@ -331,6 +331,30 @@ describe('the activity feed', () => {
     expect((await feedPage(me)).items).toEqual([]);
     await write(juno, 'patch', `/api/setups/${later}`, { visibility: 'public' }).expect(200);
     expect((await feedPage(me)).items.map(key)).toEqual([`revision:${change}`, `setup:${later}`]);
+  });
+
+  it('keeps each feed to its newest items when trimmed, leaving shorter feeds alone', async () => {
+    const [me, other, juno] = [await racer('me'), await racer('other'), await racer('juno')];
+    const sheet = await publicSetup(juno, 'Busy sheet');
+    await follow(me, juno);
+    await follow(other, juno);
+    // 12 changes one second apart for me (beside the setup), 3 for the other reader.
+    await t.db.pool.query(
+      `INSERT INTO feed_items (reader_id, created_at, kind, item_id, actor_id)
+       SELECT r.reader, timestamptz '2026-11-01 08:00:00Z' + i * interval '1 second', 'revision', 900000 + i, $3
+         FROM (VALUES ($1::integer, 12), ($2::integer, 3)) AS r(reader, n), generate_series(1, r.n) AS i`,
+      [me.id, other.id, juno.id],
+    );
+    const left = (id: number) => t.db.pool.query<{ at: Date }>('SELECT created_at AS at FROM feed_items WHERE reader_id = $1 ORDER BY created_at DESC', [id]);
+    const before = (await left(me.id)).rows;
+    expect(before).toHaveLength(13);
+    const dropped = await trimFeeds(t.db, 10);
+    // Other feeds in this database may be trimmed too: only mine and the other reader's are counted here.
+    expect(dropped).toBeGreaterThanOrEqual(3);
+    expect((await left(me.id)).rows).toEqual(before.slice(0, 10));
+    expect((await left(other.id)).rows).toHaveLength(4);
+    expect((await feedPage(me)).items[0]).toMatchObject({ kind: 'setup', id: sheet });
+    await expect(trimFeeds(t.db, 0)).rejects.toThrow('keep must be a whole number ≥ 1, got 0');
   });
 
   it('refuses a damaged cursor with a 400 that says what to do', async () => {

@@ -3,7 +3,7 @@ import { diffSetupValues } from '../../shared/compute/setup/diff';
 import { backfillChangedFieldCounts, down, up } from '../../server/db/migrations/20261202T1300-revision-change-counts';
 import { seedDemoWorld } from '../../server/seeders';
 import { scaleSizes, seedScale } from '../../scripts/seed-scale';
-import { createRacer, signIn, type SessionAgent } from '../support/accounts';
+import { signedInRacer, type SessionAgent } from '../support/accounts';
 import { carWithStockSetup, ensureCatalog, kitId } from '../support/garage';
 import { buildTestApp, resetDatabase, type TestApp } from '../support/testApp';
 
@@ -27,9 +27,7 @@ beforeAll(async () => {
   t = buildTestApp();
   await ensureCatalog(t.db);
   stoat8n = await kitId(t.db, 'ottervale-stoat-8n');
-  const [a, b] = await Promise.all([createRacer(t.db), createRacer(t.db)]);
-  owner = await signIn(t.app, a.handle, a.password);
-  forker = await signIn(t.app, b.handle, b.password);
+  [owner, forker] = await Promise.all([signedInRacer(t), signedInRacer(t)]);
 });
 afterAll(async () => {
   await t.close();

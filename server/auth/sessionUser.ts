@@ -1,4 +1,4 @@
-import { DataTypes } from 'sequelize';
+import { DataTypes, type CreationAttributes } from 'sequelize';
 import type { Database } from '../db/database';
 import type { User } from '../models/User';
 
@@ -54,7 +54,8 @@ export function sessionUserHandoff(db: Database): SessionUserHandoff {
       rows.delete(id);
       if (Date.now() - entry.at > HANDOFF_MS) return null;
       // What Sequelize itself does with a SELECT's rows: an existing record, values as read.
-      return model.build(entry.row, { isNewRecord: false, raw: true });
+      // The row holds every User column as read (userColumns), so it is the model's attributes.
+      return model.build(entry.row as CreationAttributes<User>, { isNewRecord: false, raw: true });
     },
   };
   handoffs.set(db, handoff);

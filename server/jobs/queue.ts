@@ -12,6 +12,8 @@ export const QUEUES = {
   digestMail: 'email-digest-racer',
   /** Drops rate-limit counters whose window has ended. */
   rateLimitCleanup: 'rate-limit-cleanup',
+  /** Keeps each racer's activity feed to its newest FEED_KEEP_PER_READER items (nightly). */
+  feedTrim: 'feed-trim',
 } as const;
 export type QueueName = (typeof QUEUES)[keyof typeof QUEUES];
 
@@ -37,6 +39,7 @@ function queuePolicies(config: Config): Record<QueueName, PgBoss.Queue> {
     [QUEUES.digestMail]: { name: QUEUES.digestMail, ...mail },
     [QUEUES.digestRun]: { name: QUEUES.digestRun, retryLimit: 3, retryDelay: 60, retryBackoff: true, expireInSeconds: 10 * 60 },
     [QUEUES.rateLimitCleanup]: { name: QUEUES.rateLimitCleanup, retryLimit: 0, expireInSeconds: 5 * 60 },
+    [QUEUES.feedTrim]: { name: QUEUES.feedTrim, retryLimit: 0, expireInSeconds: 15 * 60 },
   };
 }
 

@@ -1,10 +1,13 @@
 import { deleteExpiredRateLimits } from '../middleware/rateLimit';
+import { trimFeeds } from '../services/feed';
 import { deliverNotificationMail, type MailDeps, type NotificationMailJob } from '../services/emailNotifications';
 import { queueDigests, sendDigest } from './digest';
 import { QUEUES, type JobQueue } from './queue';
 
 /** Housekeeping schedule for rate-limit counters (every 15 minutes). */
 const RATE_LIMIT_CLEANUP_CRON = '*/15 * * * *';
+/** The feed trim, nightly at 03:40 (server time), away from the digest. */
+const FEED_TRIM_CRON = '40 3 * * *';
 
 /**
  * Registers this process's workers and the schedules. Schedules are rows keyed by queue name, so
@@ -25,7 +28,11 @@ export async function startWorkers(queue: JobQueue, deps: MailDeps): Promise<voi
   await queue.work(QUEUES.rateLimitCleanup, async () => {
     await deleteExpiredRateLimits(deps.db.pool);
   });
+  await queue.work(QUEUES.feedTrim, async () => {
+    logger.info({ rows: await trimFeeds(deps.db) }, 'activity feeds trimmed');
+  });
   const { digestCron, digestTimezone } = deps.config.notificationMail;
   await queue.boss.schedule(QUEUES.digestRun, digestCron, {}, { tz: digestTimezone });
   await queue.boss.schedule(QUEUES.rateLimitCleanup, RATE_LIMIT_CLEANUP_CRON, {});
+  await queue.boss.schedule(QUEUES.feedTrim, FEED_TRIM_CRON, {});
 }

@@ -135,6 +135,28 @@ export async function getFeed(db: Database, me: User, rawCursor: unknown): Promi
   };
 }
 
+/** How many items each racer's feed keeps; the nightly trim drops older ones (they stay in each setup's history). */
+export const FEED_KEEP_PER_READER = 1000;
+
+/**
+ * The nightly trim of feed_items: for each racer with more than `keep` items, drops those older
+ * than their `keep`-th newest (by the feed's own order). Answers how many rows went.
+ */
+export async function trimFeeds(db: Database, keep = FEED_KEEP_PER_READER): Promise<number> {
+  if (!Number.isInteger(keep) || keep < 1) throw new Error(`trimFeeds: keep must be a whole number ≥ 1, got ${keep}`);
+  const { rowCount } = await db.pool.query(
+    `WITH over AS (SELECT reader_id FROM feed_items GROUP BY reader_id HAVING count(*) > $1),
+          cut AS (SELECT o.reader_id, k.created_at, k.kind, k.item_id
+                    FROM over o
+                    CROSS JOIN LATERAL (SELECT fi.created_at, fi.kind, fi.item_id FROM feed_items fi WHERE fi.reader_id = o.reader_id
+                                         ORDER BY fi.created_at DESC, fi.kind DESC, fi.item_id DESC OFFSET $1 - 1 LIMIT 1) k)
+     DELETE FROM feed_items fi USING cut
+      WHERE fi.reader_id = cut.reader_id AND (fi.created_at, fi.kind, fi.item_id) < (cut.created_at, cut.kind, cut.item_id)`,
+    [keep],
+  );
+  return rowCount ?? 0;
+}
+
 const SUGGESTION_COUNT = 8;
 
 /**
