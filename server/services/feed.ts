@@ -60,7 +60,7 @@ type FeedCursor = z.infer<typeof feedCursorSchema>;
  * once, as the fork. $1 is me, $2 the page size plus one (to know whether there is more), and after
  * a cursor $3..$5 its (time, kind, id): the row comparison is a range of the primary key.
  */
-export function feedSql(cursor: FeedCursor | null): string {
+function feedSql(cursor: FeedCursor | null): string {
   return `
     SELECT fi.kind, fi.item_id AS id, fi.created_at, ${cursorTime('fi.created_at')} AS cursor_at,
            u.handle AS actor_handle, u.display_name AS actor_name, s.id AS setup_id, s.title AS setup_title, s.vehicle_class,
