@@ -105,7 +105,9 @@ describe('notification e-mail through the job queue', () => {
     const [typeToken, allToken] = unsubscribeLinks(mail.textBody);
     expect(typeToken).toMatch(new RegExp(`^${target.user.id}\\.new-follower\\.`));
     expect(allToken).toMatch(new RegExp(`^${target.user.id}\\.all\\.`));
-    // It went through pg-boss: one job for this racer, completed on the first try.
+    // It went through pg-boss: one job for this racer, completed on the first try. pg-boss marks
+    // the job completed after the handler returns, a moment after the mail is in the mailbox.
+    await waitUntil('the job is completed', allJobsDone(t, target.user.id, 1));
     expect(await mailJobsFor(t, target.user.id)).toEqual([{ state: 'completed', retry_count: 0 }]);
   });
 
