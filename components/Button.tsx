@@ -38,7 +38,8 @@ export function Button({ label, onPress, variant = 'primary', disabled, busy, bu
         },
       ]}
     >
-      {busy ? <ActivityIndicator size="small" color={filled ? colors.accentText : tint} /> : null}
+      {/* The button's name says it is busy (busyLabel); the spinner is decoration. */}
+      {busy ? <ActivityIndicator size="small" color={filled ? colors.accentText : tint} aria-hidden /> : null}
       <AppText variant="body" style={[styles.label, { color: filled ? colors.accentText : tint }]}>
         {shown}
       </AppText>

@@ -11,7 +11,8 @@ export function LoadingState({ label }: LoadingStateProps) {
   const { colors } = useTheme();
   return (
     <View style={styles.row} role="status" aria-live="polite">
-      <ActivityIndicator color={colors.accent} />
+      {/* The words beside it say what is loading; the spinner itself is decoration. */}
+      <ActivityIndicator color={colors.accent} aria-hidden />
       <AppText tone="muted">{label}</AppText>
     </View>
   );
